@@ -1,0 +1,44 @@
+import { z } from 'zod';
+
+/** Client-generated identifiers for clinical rows (resuscitations, events, samples). */
+export const uuidSchema = z.uuid();
+
+/** ISO-8601 date-time with an offset (`Z` or `+hh:mm`), as every clinical time is stored. */
+export const isoDateTimeSchema = z.iso.datetime({ offset: true });
+
+export const roleSchema = z.enum(['recorder', 'lead', 'quality', 'admin']);
+export type Role = z.infer<typeof roleSchema>;
+
+export const co2UnitSchema = z.enum(['mmHg', 'kPa', '%']);
+export type Co2Unit = z.infer<typeof co2UnitSchema>;
+
+export function listSchema<T extends z.ZodType>(item: T) {
+  return z.object({ items: z.array(item), total: z.number().int().nonnegative() });
+}
+export interface List<T> {
+  items: T[];
+  total: number;
+}
+
+/** The one error shape every API failure uses. */
+export const apiErrorSchema = z.object({
+  statusCode: z.number().int(),
+  error: z.string(),
+  message: z.string(),
+  details: z.array(z.object({ path: z.string(), message: z.string() })).optional(),
+});
+export type ApiError = z.infer<typeof apiErrorSchema>;
+
+/** Result of an idempotent batch upload (events, EtCO2 values, waveform chunks). */
+export const batchResultSchema = z.object({
+  accepted: z.number().int().nonnegative(),
+  duplicates: z.number().int().nonnegative(),
+  rejected: z.array(z.object({ id: z.string(), reason: z.string() })),
+});
+export type BatchResult = z.infer<typeof batchResultSchema>;
+
+export const healthSchema = z.object({
+  status: z.enum(['ok', 'degraded']),
+  db: z.enum(['ok', 'down']),
+});
+export type Health = z.infer<typeof healthSchema>;

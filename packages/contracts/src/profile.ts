@@ -1,0 +1,113 @@
+import { z } from 'zod';
+import { isoDateTimeSchema, uuidSchema } from './common.js';
+
+/**
+ * Every threshold the analysis uses. Defaults are published guideline values (shared
+ * REFERENCE.md); each one is a site setting because local protocols differ.
+ */
+export const thresholdsSchema = z
+  .object({
+    lowEtco2MmHg: z.number().min(1).max(40),
+    lowEtco2MinSec: z.number().min(5).max(300),
+    targetEtco2MmHg: z.number().min(5).max(60),
+    riseMmHg: z.number().min(2).max(60),
+    riseBaselineSec: z.number().min(10).max(600),
+    riseSustainSec: z.number().min(5).max(600),
+    confounderWindowSec: z.number().min(0).max(1800),
+    prognosisAfterSec: z.number().min(60).max(7200),
+    prognosisEtco2MmHg: z.number().min(1).max(40),
+    pauseMaxSec: z.number().min(2).max(120),
+    preshockPauseMaxSec: z.number().min(2).max(120),
+    rhythmCheckIntervalSec: z.number().min(30).max(600),
+    rhythmCheckToleranceSec: z.number().min(0).max(300),
+    epinephrineMinSec: z.number().min(30).max(1200),
+    epinephrineMaxSec: z.number().min(30).max(1800),
+    ventilationMaxPerMin: z.number().min(4).max(40),
+    ventilationTolerancePerMin: z.number().min(0).max(20),
+    waveformAbsentSec: z.number().min(5).max(600),
+    rebreathingBaselineMmHg: z.number().min(0.5).max(20),
+    compressionFractionTarget: z.number().min(0).max(1),
+    paediatricEpinephrineMgPerKg: z.number().min(0).max(1),
+    paediatricFirstShockJPerKg: z.number().min(0).max(10),
+    paediatricLaterShockJPerKg: z.number().min(0).max(10),
+  })
+  .refine((t) => t.epinephrineMinSec <= t.epinephrineMaxSec, {
+    path: ['epinephrineMaxSec'],
+    error: 'The longest epinephrine interval must not be shorter than the shortest',
+  });
+export type Thresholds = z.infer<typeof thresholdsSchema>;
+
+/** Guideline defaults, each with its source (see shared REFERENCE.md for status). */
+export const thresholdDefaults: Thresholds = {
+  lowEtco2MmHg: 10, // AHA 2020 adult ALS; Sandroni 2018
+  lowEtco2MinSec: 20, // product rule (PRODUCT.md): common practice
+  targetEtco2MmHg: 20, // Meaney 2013 consensus
+  riseMmHg: 10, // Lui 2016, Resuscitation 104:53
+  riseBaselineSec: 60, // PRODUCT.md rule: common practice
+  riseSustainSec: 30, // PRODUCT.md rule: common practice
+  confounderWindowSec: 120, // Roh 2024 (bicarbonate rise lasts minutes)
+  prognosisAfterSec: 1200, // Paiva 2018 (20 min)
+  prognosisEtco2MmHg: 10, // Paiva 2018
+  pauseMaxSec: 10, // AHA BLS: interruptions < 10 s
+  preshockPauseMaxSec: 10, // Cheskes 2011
+  rhythmCheckIntervalSec: 120, // AHA 2020; RCUK 2021
+  rhythmCheckToleranceSec: 15, // common practice
+  epinephrineMinSec: 180, // AHA 2020: every 3–5 min
+  epinephrineMaxSec: 300, // AHA 2020
+  ventilationMaxPerMin: 10, // AHA 2020: 1 breath every 6 s with an advanced airway
+  ventilationTolerancePerMin: 2, // common practice
+  waveformAbsentSec: 30, // PRODUCT.md rule: common practice
+  rebreathingBaselineMmHg: 2, // secondary source, cut-off from memory
+  compressionFractionTarget: 0.8, // Meaney 2013 goal (> 80 %)
+  paediatricEpinephrineMgPerKg: 0.01, // AHA 2020 paediatric (memory)
+  paediatricFirstShockJPerKg: 2, // AHA 2020 paediatric (memory)
+  paediatricLaterShockJPerKg: 4, // AHA 2020 paediatric (memory)
+};
+
+/** Where each default comes from, shown beside the field on the Admin screen. */
+export const thresholdSources: Record<keyof Thresholds, string> = {
+  lowEtco2MmHg: 'AHA 2020 adult ALS; Sandroni 2018, Resuscitation 132:73',
+  lowEtco2MinSec: 'Common practice',
+  targetEtco2MmHg: 'Meaney 2013, Circulation 128:417',
+  riseMmHg: 'Lui 2016, Resuscitation 104:53',
+  riseBaselineSec: 'Common practice',
+  riseSustainSec: 'Common practice',
+  confounderWindowSec: 'Roh 2024, Am J Emerg Med 76:211',
+  prognosisAfterSec: 'Paiva 2018 systematic review, Resuscitation',
+  prognosisEtco2MmHg: 'Paiva 2018 systematic review, Resuscitation',
+  pauseMaxSec: 'AHA BLS guidance',
+  preshockPauseMaxSec: 'Cheskes 2011, Circulation 124:58',
+  rhythmCheckIntervalSec: 'AHA 2020; Resuscitation Council UK 2021',
+  rhythmCheckToleranceSec: 'Common practice',
+  epinephrineMinSec: 'AHA 2020',
+  epinephrineMaxSec: 'AHA 2020',
+  ventilationMaxPerMin: 'AHA 2020 (1 breath every 6 s with an advanced airway)',
+  ventilationTolerancePerMin: 'Common practice',
+  waveformAbsentSec: 'Common practice',
+  rebreathingBaselineMmHg: 'Secondary source; cut-off from memory',
+  compressionFractionTarget: 'Meaney 2013 (goal > 80 %)',
+  paediatricEpinephrineMgPerKg: 'AHA 2020 paediatric guideline (from memory)',
+  paediatricFirstShockJPerKg: 'AHA 2020 paediatric guideline (from memory)',
+  paediatricLaterShockJPerKg: 'AHA 2020 paediatric guideline (from memory)',
+};
+
+/** A partial profile as the analysis input accepts it; missing values take the defaults. */
+export const profileInputSchema = z
+  .object(
+    Object.fromEntries(
+      Object.keys(thresholdDefaults).map((k) => [k, z.number().finite().optional()]),
+    ) as { [K in keyof Thresholds]: z.ZodOptional<z.ZodNumber> },
+  )
+  .strict();
+export type ProfileInput = z.infer<typeof profileInputSchema>;
+
+export const protocolProfileSchema = z.object({
+  id: uuidSchema,
+  siteId: uuidSchema,
+  version: z.number().int().positive(),
+  name: z.string().min(1).max(120),
+  thresholds: thresholdsSchema,
+  createdAt: isoDateTimeSchema,
+  createdBy: z.string().nullable(),
+});
+export type ProtocolProfile = z.infer<typeof protocolProfileSchema>;

@@ -1,0 +1,111 @@
+import { z } from 'zod';
+import { co2UnitSchema, isoDateTimeSchema, uuidSchema } from './common.js';
+import { etco2SourceSchema } from './analysis.js';
+import { endReasonSchema, rhythmSchema } from './events.js';
+
+export const ageGroupSchema = z.enum(['adult', 'child', 'infant']);
+export type AgeGroup = z.infer<typeof ageGroupSchema>;
+export const resuscitationStatusSchema = z.enum(['open', 'closed', 'signed']);
+export type ResuscitationStatus = z.infer<typeof resuscitationStatusSchema>;
+
+export const createResuscitationSchema = z
+  .object({
+    id: uuidSchema,
+    siteId: uuidSchema,
+    unitId: uuidSchema.optional(),
+    arrestAt: isoDateTimeSchema,
+    location: z.string().max(200).optional(),
+    patientRef: z.string().max(100).optional(),
+    ageGroup: ageGroupSchema.optional(),
+    weightKg: z.number().positive().max(400).optional(),
+  })
+  .strict();
+export type CreateResuscitation = z.infer<typeof createResuscitationSchema>;
+
+export const outcomeSchema = z.enum([
+  'rosc-sustained',
+  'rosc-not-sustained',
+  'died',
+  'transferred',
+]);
+
+/** Closing details (Utstein core fields), editable until the record is signed. */
+export const patchResuscitationSchema = z
+  .object({
+    unitId: uuidSchema.nullable(),
+    arrestAt: isoDateTimeSchema,
+    location: z.string().max(200).nullable(),
+    patientRef: z.string().max(100).nullable(),
+    ageGroup: ageGroupSchema.nullable(),
+    weightKg: z.number().positive().max(400).nullable(),
+    status: z.enum(['open', 'closed']),
+    witnessed: z.boolean().nullable(),
+    monitored: z.boolean().nullable(),
+    firstRhythm: rhythmSchema.nullable(),
+    outcome: outcomeSchema.nullable(),
+    endReason: endReasonSchema.nullable(),
+    notesWentWell: z.string().max(5000).nullable(),
+    notesToChange: z.string().max(5000).nullable(),
+  })
+  .partial()
+  .strict();
+export type PatchResuscitation = z.infer<typeof patchResuscitationSchema>;
+
+export const resuscitationSchema = z.object({
+  id: uuidSchema,
+  siteId: uuidSchema,
+  unitId: uuidSchema.nullable(),
+  arrestAt: isoDateTimeSchema,
+  location: z.string().nullable(),
+  patientRef: z.string().nullable(),
+  ageGroup: ageGroupSchema.nullable(),
+  weightKg: z.number().nullable(),
+  status: resuscitationStatusSchema,
+  witnessed: z.boolean().nullable(),
+  monitored: z.boolean().nullable(),
+  firstRhythm: rhythmSchema.nullable(),
+  outcome: outcomeSchema.nullable(),
+  endReason: endReasonSchema.nullable(),
+  notesWentWell: z.string().nullable(),
+  notesToChange: z.string().nullable(),
+  createdBy: z.string().nullable(),
+  createdAt: isoDateTimeSchema,
+  signedAt: isoDateTimeSchema.nullable(),
+  signedBy: z.string().nullable(),
+});
+export type Resuscitation = z.infer<typeof resuscitationSchema>;
+
+export const listResuscitationsQuerySchema = z.object({
+  status: resuscitationStatusSchema.optional(),
+  siteId: uuidSchema.optional(),
+  from: isoDateTimeSchema.optional(),
+  to: isoDateTimeSchema.optional(),
+  limit: z.coerce.number().int().min(1).max(500).default(100),
+  offset: z.coerce.number().int().min(0).default(0),
+});
+
+/** One EtCO2 value as synced from a tablet (`POST …/etco2/batch`). */
+export const etco2SampleSchema = z
+  .object({
+    id: uuidSchema,
+    at: isoDateTimeSchema,
+    value: z.number().finite().min(0).max(150),
+    unit: co2UnitSchema,
+    source: etco2SourceSchema,
+    deviceId: z.string().max(200).optional(),
+  })
+  .strict();
+export type Etco2Sample = z.infer<typeof etco2SampleSchema>;
+
+/** A chunk of raw capnogram, stored as sent (`POST …/waveform/batch`). */
+export const waveformChunkSchema = z
+  .object({
+    id: uuidSchema,
+    startAt: isoDateTimeSchema,
+    sampleRateHz: z.number().min(10).max(200),
+    unit: co2UnitSchema,
+    seq: z.number().int().nonnegative().optional(),
+    values: z.array(z.number().finite()).min(1).max(60000),
+  })
+  .strict();
+export type WaveformChunk = z.infer<typeof waveformChunkSchema>;

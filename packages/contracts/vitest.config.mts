@@ -1,0 +1,7 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  resolve: { conditions: ['upstroke-source'] },
+  ssr: { resolve: { conditions: ['upstroke-source'] } },
+  test: { name: 'contracts', environment: 'node', include: ['src/**/*.spec.ts'] },
+});
