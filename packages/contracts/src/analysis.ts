@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { co2UnitSchema, isoDateTimeSchema } from './common.js';
-import { analysisEventSchema } from './events.js';
+import { analysisEventSchema, endReasonSchema, rhythmSchema } from './events.js';
 import { profileInputSchema } from './profile.js';
 
 export const etco2SourceSchema = z.enum(['manual', 'stream', 'import', 'waveform']);
@@ -35,6 +35,10 @@ export const analysisInputSchema = z.object({
 });
 export type AnalysisInput = z.infer<typeof analysisInputSchema>;
 
+/** A time interval in seconds from the arrest. */
+export const intervalSchema = z.object({ startSec: z.number(), endSec: z.number() });
+export type Interval = z.infer<typeof intervalSchema>;
+
 export const pauseContextSchema = z.enum([
   'pre-shock',
   'post-shock',
@@ -49,6 +53,10 @@ export const pauseSchema = z.object({
   endSec: z.number(),
   durationSec: z.number(),
   context: pauseContextSchema,
+  /** Pre-shock part of the pause: from compressions stopping to the shock (pre-shock pauses only). */
+  preShockSec: z.number().optional(),
+  /** Post-shock part of the pause: from the shock to compressions resuming (pre-shock pauses only). */
+  postShockSec: z.number().optional(),
 });
 export type Pause = z.infer<typeof pauseSchema>;
 
@@ -103,6 +111,14 @@ export const measuresSchema = z.object({
     fractionAtOrAbove10: z.number().nullable(),
     fractionAtOrAbove20: z.number().nullable(),
   }),
+  /** Total compression time (s) inside the time without circulation. */
+  compressionSec: z.number().optional(),
+  /** Denominator of the compression fraction (s): arrest to first ROSC or end, minus pulse intervals. */
+  timeWithoutCirculationSec: z.number().optional(),
+  compressionIntervals: z.array(intervalSchema).optional(),
+  rhythmCheckIntervalsSec: z.array(z.number()).optional(),
+  /** Documented circulation: ROSC to re-arrest or end of record. */
+  roscPeriods: z.array(intervalSchema).optional(),
 });
 export type Measures = z.infer<typeof measuresSchema>;
 
@@ -113,3 +129,58 @@ export const analysisOutputSchema = z.object({
   breaths: z.array(breathSchema),
 });
 export type AnalysisOutput = z.infer<typeof analysisOutputSchema>;
+
+/** One EtCO2 value on the merged series, in mmHg, with where it came from. */
+export const etco2PointSchema = z.object({
+  tSec: z.number(),
+  mmHg: z.number(),
+  source: etco2SourceSchema,
+});
+export type Etco2Point = z.infer<typeof etco2PointSchema>;
+
+/** One window of the EtCO2 trend: the median of the values that fall inside it. */
+export const etco2TrendPointSchema = z.object({
+  startSec: z.number(),
+  endSec: z.number(),
+  medianMmHg: z.number(),
+  count: z.number().int().positive(),
+  sources: z.array(etco2SourceSchema),
+});
+export type Etco2TrendPoint = z.infer<typeof etco2TrendPointSchema>;
+
+/** What the team records when closing a record and the events cannot tell. */
+export const summaryClosingDetailsSchema = z.object({
+  witnessed: z.boolean().nullable().optional(),
+  monitored: z.boolean().nullable().optional(),
+  firstRhythm: rhythmSchema.nullable().optional(),
+  /** The lead attests ROSC lasted >= 20 min without compressions (e.g. after handover). */
+  sustainedRosc: z.boolean().optional(),
+});
+export type SummaryClosingDetails = z.infer<typeof summaryClosingDetailsSchema>;
+
+/**
+ * Per-record audit row (Utstein-style core elements plus EtCO2 process measures), written
+ * by the API when a record is signed so that trends never re-scan raw samples.
+ */
+export const recordSummarySchema = z.object({
+  witnessed: z.boolean().nullable(),
+  monitored: z.boolean().nullable(),
+  firstRhythm: rhythmSchema.nullable(),
+  shockableFirstRhythm: z.boolean().nullable(),
+  timeToCprSec: z.number().nullable(),
+  timeToFirstShockSec: z.number().nullable(),
+  timeToFirstEpinephrineSec: z.number().nullable(),
+  anyRosc: z.boolean(),
+  sustainedRosc: z.boolean(),
+  compressionFraction: z.number().nullable(),
+  longestPauseSec: z.number().nullable(),
+  preshockPausesOverThreshold: z.number().int().nonnegative(),
+  etco2Documented: z.boolean(),
+  medianEtco2MmHg: z.number().nullable(),
+  fractionEtco2AtOrAbove10: z.number().nullable(),
+  fractionEtco2AtOrAbove20: z.number().nullable(),
+  findingCounts: z.record(findingKindSchema, z.number().int().nonnegative()),
+  durationSec: z.number(),
+  endReason: endReasonSchema.nullable(),
+});
+export type RecordSummary = z.infer<typeof recordSummarySchema>;

@@ -1,0 +1,44 @@
+import { type DynamicModule, Module } from '@nestjs/common';
+import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { LoggerModule } from 'nestjs-pino';
+import { JwtAuthGuard, RolesGuard } from './common/auth.guards';
+import { ErrorFilter } from './common/error.filter';
+import { APP_CONFIG, type AppConfig } from './config';
+import { DatabaseModule } from './db/database.module';
+import { AuditModule } from './modules/audit/audit.module';
+import { AuthModule } from './modules/auth/auth.module';
+import { HealthModule } from './modules/health/health.module';
+import { ResuscitationsModule } from './modules/resuscitations/resuscitations.module';
+
+@Module({})
+export class AppModule {
+  static register(config: AppConfig): DynamicModule {
+    const quiet = process.env.NODE_ENV === 'test' || process.env.LOG_LEVEL === 'silent';
+    return {
+      module: AppModule,
+      global: true,
+      imports: [
+        LoggerModule.forRoot({
+          pinoHttp: {
+            level: quiet ? 'silent' : (process.env.LOG_LEVEL ?? 'info'),
+            // Tokens and passwords never reach the log.
+            redact: ['req.headers.authorization', 'req.body.password'],
+            autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+          },
+        }),
+        DatabaseModule,
+        AuditModule,
+        AuthModule,
+        HealthModule,
+        ResuscitationsModule,
+      ],
+      providers: [
+        { provide: APP_CONFIG, useValue: config },
+        { provide: APP_GUARD, useClass: JwtAuthGuard },
+        { provide: APP_GUARD, useClass: RolesGuard },
+        { provide: APP_FILTER, useClass: ErrorFilter },
+      ],
+      exports: [APP_CONFIG],
+    };
+  }
+}

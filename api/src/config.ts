@@ -1,0 +1,36 @@
+import crypto from 'node:crypto';
+
+/** Runtime settings, all from the environment (see DEVELOPERS.md). */
+export interface AppConfig {
+  port: number;
+  databaseUrl: string;
+  jwtSecret: string;
+  jwtExpiresInSec: number;
+  loginLimitPerMinute: number;
+  webDist: string | null;
+  publicUrl: string;
+  smtp: { host: string; port: number; from: string };
+  smtpSinkPort: number | null;
+}
+
+export const APP_CONFIG = Symbol('APP_CONFIG');
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const port = Number(env.PORT ?? 8080);
+  return {
+    port,
+    databaseUrl: env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:54329/upstroke',
+    // Without a configured secret every restart signs tokens anew: users sign in again.
+    jwtSecret: env.JWT_SECRET ?? crypto.randomBytes(32).toString('hex'),
+    jwtExpiresInSec: Number(env.JWT_EXPIRES_IN_SEC ?? 12 * 3600),
+    loginLimitPerMinute: Number(env.LOGIN_LIMIT_PER_MINUTE ?? 5),
+    webDist: env.WEB_DIST ?? null,
+    publicUrl: env.PUBLIC_URL ?? `http://localhost:${port}`,
+    smtp: {
+      host: env.SMTP_HOST ?? '127.0.0.1',
+      port: Number(env.SMTP_PORT ?? 2525),
+      from: env.MAIL_FROM ?? 'Upstroke <no-reply@kestrel.test>',
+    },
+    smtpSinkPort: env.SMTP_SINK_PORT ? Number(env.SMTP_SINK_PORT) : null,
+  };
+}

@@ -1,0 +1,25 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { KNEX, type Db } from '../../db/knex';
+
+export interface AuditEntry {
+  userId: string | null;
+  action: string;
+  entity: string;
+  entityId?: string | null;
+  resuscitationId?: string | null;
+  deviceId?: string | null;
+  details?: Record<string, unknown>;
+}
+
+/** Append-only trail of who did what to which record, when and from which device. */
+@Injectable()
+export class AuditRepository {
+  constructor(@Inject(KNEX) private readonly db: Db) {}
+
+  async insert(entry: AuditEntry, trx?: Db): Promise<void> {
+    await (trx ?? this.db)('auditLog').insert({
+      ...entry,
+      details: JSON.stringify(entry.details ?? {}),
+    });
+  }
+}

@@ -1,0 +1,30 @@
+import { Body, Controller, Get, HttpCode, Post, UseGuards } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { Throttle } from '@nestjs/throttler';
+import { type LoginRequest, loginRequestSchema, type LoginResponse } from '@upstroke/contracts';
+import { type AuthUser, CurrentUser, Public, Roles } from '../../common/auth.decorators';
+import { ZodPipe } from '../../common/zod.pipe';
+import { AuthService } from './auth.service';
+import { LoginThrottlerGuard } from './login-throttler.guard';
+
+@ApiTags('auth')
+@Controller('auth')
+export class AuthController {
+  constructor(private readonly auth: AuthService) {}
+
+  @Public()
+  @UseGuards(LoginThrottlerGuard)
+  @Throttle({ login: {} })
+  @Post('login')
+  @HttpCode(200)
+  login(@Body(new ZodPipe(loginRequestSchema)) body: LoginRequest): Promise<LoginResponse> {
+    return this.auth.login(body);
+  }
+
+  @ApiBearerAuth()
+  @Roles('recorder', 'lead', 'quality', 'admin')
+  @Get('me')
+  me(@CurrentUser() user: AuthUser): AuthUser {
+    return user;
+  }
+}

@@ -1,0 +1,102 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { Resuscitation, ResuscitationStatus } from '@upstroke/contracts';
+import { KNEX, type Db } from '../../db/knex';
+
+export interface ResuscitationRow extends Omit<
+  Resuscitation,
+  'arrestAt' | 'createdAt' | 'signedAt'
+> {
+  arrestAt: Date;
+  createdAt: Date;
+  signedAt: Date | null;
+  profileId: string | null;
+  deviceId: string | null;
+  updatedAt: Date;
+}
+
+export interface ListFilter {
+  siteIds: string[];
+  status?: ResuscitationStatus;
+  from?: string;
+  to?: string;
+  limit: number;
+  offset: number;
+}
+
+const columns = [
+  'id',
+  'siteId',
+  'unitId',
+  'arrestAt',
+  'location',
+  'patientRef',
+  'ageGroup',
+  'weightKg',
+  'status',
+  'witnessed',
+  'monitored',
+  'firstRhythm',
+  'outcome',
+  'endReason',
+  'notesWentWell',
+  'notesToChange',
+  'createdBy',
+  'createdAt',
+  'signedAt',
+  'signedBy',
+  'profileId',
+  'deviceId',
+  'updatedAt',
+];
+
+/** SQL for resuscitation records; no rules here. */
+@Injectable()
+export class ResuscitationsRepository {
+  constructor(@Inject(KNEX) private readonly db: Db) {}
+
+  async findById(id: string, trx?: Db): Promise<ResuscitationRow | undefined> {
+    return (trx ?? this.db)<ResuscitationRow>('resuscitations').where({ id }).first(columns);
+  }
+
+  /** Inserts unless the id exists; returns true when a row was added. */
+  async insertIfAbsent(row: Record<string, unknown>, trx?: Db): Promise<boolean> {
+    const added = await (trx ?? this.db)('resuscitations')
+      .insert(row)
+      .onConflict('id')
+      .ignore()
+      .returning('id');
+    return added.length > 0;
+  }
+
+  async update(id: string, patch: Record<string, unknown>, trx?: Db): Promise<void> {
+    await (trx ?? this.db)('resuscitations')
+      .where({ id })
+      .update({ ...patch, updatedAt: new Date() });
+  }
+
+  async list(filter: ListFilter): Promise<{ items: ResuscitationRow[]; total: number }> {
+    const q = this.db('resuscitations').whereIn('siteId', filter.siteIds);
+    if (filter.status) q.where('status', filter.status);
+    if (filter.from) q.where('arrestAt', '>=', filter.from);
+    if (filter.to) q.where('arrestAt', '<', filter.to);
+    const [{ count }] = await q.clone().count<{ count: number }[]>({ count: '*' });
+    const items = await q
+      .orderBy('arrestAt', 'desc')
+      .limit(filter.limit)
+      .offset(filter.offset)
+      .select<ResuscitationRow[]>(columns);
+    return { items, total: Number(count) };
+  }
+
+  async unitBelongsToSite(unitId: string, siteId: string): Promise<boolean> {
+    return Boolean(await this.db('units').where({ id: unitId, siteId }).first('id'));
+  }
+
+  async latestProfileId(siteId: string): Promise<string | null> {
+    const row = await this.db('protocolProfiles')
+      .where({ siteId })
+      .orderBy('version', 'desc')
+      .first<{ id: string }>('id');
+    return row?.id ?? null;
+  }
+}

@@ -1,0 +1,117 @@
+import { Injectable } from '@nestjs/common';
+import type { CreateResuscitation, PatchResuscitation, Resuscitation } from '@upstroke/contracts';
+import { type AuthUser, canSeeSite } from '../../common/auth.decorators';
+import { badRequest, conflict, forbidden } from '../../common/errors';
+import { AuditRepository } from '../audit/audit.repository';
+import { ClinicalDataRepository } from './clinical-data.repository';
+import { ResuscitationAccess } from './resuscitation-access';
+import {
+  type ListFilter,
+  type ResuscitationRow,
+  ResuscitationsRepository,
+} from './resuscitations.repository';
+
+export function toResuscitation(
+  row: ResuscitationRow,
+): Resuscitation & { profileId: string | null } {
+  return {
+    ...row,
+    arrestAt: row.arrestAt.toISOString(),
+    createdAt: row.createdAt.toISOString(),
+    signedAt: row.signedAt ? row.signedAt.toISOString() : null,
+  };
+}
+
+@Injectable()
+export class ResuscitationsService {
+  constructor(
+    private readonly records: ResuscitationsRepository,
+    private readonly data: ClinicalDataRepository,
+    private readonly access: ResuscitationAccess,
+    private readonly audit: AuditRepository,
+  ) {}
+
+  /** Idempotent on the client's id: a replay returns the stored record unchanged. */
+  async create(
+    user: AuthUser,
+    body: CreateResuscitation,
+    deviceId?: string,
+  ): Promise<{ created: boolean; record: Resuscitation }> {
+    if (!canSeeSite(user, body.siteId)) throw forbidden('You cannot record on this site');
+    if (body.unitId && !(await this.records.unitBelongsToSite(body.unitId, body.siteId))) {
+      throw badRequest('unitId: this unit is not part of the site', [
+        { path: 'unitId', message: 'Unknown unit for this site' },
+      ]);
+    }
+    const existing = await this.records.findById(body.id);
+    if (existing) {
+      if (existing.siteId !== body.siteId)
+        throw conflict('A different record already uses this id');
+      return { created: false, record: toResuscitation(existing) };
+    }
+    const profileId = await this.records.latestProfileId(body.siteId);
+    const created = await this.records.insertIfAbsent({
+      ...body,
+      profileId,
+      createdBy: user.id,
+      deviceId: deviceId ?? null,
+    });
+    if (created) {
+      await this.audit.insert({
+        userId: user.id,
+        action: 'create',
+        entity: 'resuscitation',
+        entityId: body.id,
+        resuscitationId: body.id,
+        deviceId,
+      });
+    }
+    const record = await this.access.readable(user, body.id);
+    return { created, record: toResuscitation(record) };
+  }
+
+  async list(user: AuthUser, query: Omit<ListFilter, 'siteIds'> & { siteId?: string }) {
+    const siteIds = query.siteId ? user.siteIds.filter((s) => s === query.siteId) : user.siteIds;
+    const { items, total } = await this.records.list({ ...query, siteIds });
+    return { items: items.map(toResuscitation), total };
+  }
+
+  async get(user: AuthUser, id: string) {
+    const record = await this.access.readable(user, id);
+    const [events, etco2] = await Promise.all([this.data.events(id), this.data.etco2(id)]);
+    return {
+      ...toResuscitation(record),
+      events: events.map((e) => ({
+        ...e,
+        at: e.at.toISOString(),
+        receivedAt: e.receivedAt.toISOString(),
+      })),
+      etco2: etco2.map((s) => ({ ...s, at: s.at.toISOString() })),
+    };
+  }
+
+  async patch(
+    user: AuthUser,
+    id: string,
+    patch: PatchResuscitation,
+    deviceId?: string,
+  ): Promise<Resuscitation> {
+    const record = await this.access.writable(user, id);
+    if (patch.unitId && !(await this.records.unitBelongsToSite(patch.unitId, record.siteId))) {
+      throw badRequest('unitId: this unit is not part of the site', [
+        { path: 'unitId', message: 'Unknown unit for this site' },
+      ]);
+    }
+    await this.records.update(id, patch);
+    await this.audit.insert({
+      userId: user.id,
+      action: 'update',
+      entity: 'resuscitation',
+      entityId: id,
+      resuscitationId: id,
+      deviceId,
+      details: { fields: Object.keys(patch) },
+    });
+    return toResuscitation((await this.records.findById(id)) as ResuscitationRow);
+  }
+}

@@ -1,0 +1,68 @@
+import type { Etco2Point, Interval } from '@upstroke/contracts';
+import { median } from '../time.js';
+
+/**
+ * A value is taken to stand from its time until the next value, for at most this long:
+ * entered values come about once a minute, breaths every few seconds (common practice).
+ */
+export const MAX_HOLD_SEC = 60;
+
+export interface Etco2Segment extends Interval {
+  mmHg: number;
+}
+
+/** The series as a step function: each value holds until the next one (≤ MAX_HOLD_SEC). */
+export function stepSegments(points: readonly Etco2Point[], endSec: number): Etco2Segment[] {
+  const out: Etco2Segment[] = [];
+  for (let i = 0; i < points.length; i++) {
+    const s = points[i].tSec;
+    const next = i + 1 < points.length ? points[i + 1].tSec : endSec;
+    const e = Math.min(next, s + MAX_HOLD_SEC, Math.max(endSec, s));
+    if (e > s) out.push({ startSec: s, endSec: e, mmHg: points[i].mmHg });
+  }
+  return out;
+}
+
+/** Length of the part of `seg` that lies inside `xs` (disjoint, sorted), from index `j`. */
+function overlapFrom(xs: readonly Interval[], seg: Interval, j: number): number {
+  let s = 0;
+  for (let k = j; k < xs.length && xs[k].startSec < seg.endSec; k++) {
+    s += Math.max(0, Math.min(xs[k].endSec, seg.endSec) - Math.max(xs[k].startSec, seg.startSec));
+  }
+  return s;
+}
+
+/**
+ * EtCO2 process measures over CPR time (the compression intervals):
+ * - `medianMmHg`: median of the values recorded during compressions;
+ * - `fractionAtOrAbove10/20`: share of the CPR time covered by a value (see MAX_HOLD_SEC)
+ *   during which EtCO2 was ≥ 10 and ≥ 20 mmHg. Null when no value falls in CPR time.
+ */
+export function etco2Measures(
+  points: readonly Etco2Point[],
+  segments: readonly Etco2Segment[],
+  cpr: readonly Interval[],
+) {
+  const during: number[] = [];
+  let j = 0;
+  for (const p of points) {
+    while (j < cpr.length && cpr[j].endSec <= p.tSec) j++;
+    if (j < cpr.length && p.tSec >= cpr[j].startSec) during.push(p.mmHg);
+  }
+  let covered = 0;
+  let at10 = 0;
+  let at20 = 0;
+  j = 0;
+  for (const seg of segments) {
+    while (j < cpr.length && cpr[j].endSec <= seg.startSec) j++;
+    const len = overlapFrom(cpr, seg, j);
+    covered += len;
+    if (seg.mmHg >= 10) at10 += len;
+    if (seg.mmHg >= 20) at20 += len;
+  }
+  return {
+    medianMmHg: median(during),
+    fractionAtOrAbove10: covered > 0 ? at10 / covered : null,
+    fractionAtOrAbove20: covered > 0 ? at20 / covered : null,
+  };
+}

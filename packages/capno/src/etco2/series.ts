@@ -1,0 +1,70 @@
+import type {
+  AnalysisEtco2,
+  Breath,
+  Etco2Point,
+  Etco2Source,
+  Etco2TrendPoint,
+} from '@upstroke/contracts';
+import { median, secondsFrom } from '../time.js';
+import { toMmHg } from '../units.js';
+
+/** Default trend window: one median per 30 s (common practice for a debrief timeline). */
+export const TREND_WINDOW_SEC = 30;
+
+/**
+ * The merged EtCO2 series in mmHg, sorted by time: entered and imported values keep their
+ * `source`; per-breath values from a waveform come in as source `waveform`.
+ */
+export function etco2Series(
+  arrestAt: string,
+  values: readonly AnalysisEtco2[] = [],
+  breaths: readonly Breath[] = [],
+): Etco2Point[] {
+  const pts: Etco2Point[] = values.map((v) => ({
+    tSec: secondsFrom(arrestAt, v.at),
+    mmHg: toMmHg(v.value, v.unit, v.barometricMmHg),
+    source: v.source,
+  }));
+  for (const b of breaths) pts.push({ tSec: b.tSec, mmHg: b.etco2MmHg, source: 'waveform' });
+  return sortByTime(pts);
+}
+
+/** Stable sort by time (already-sorted input costs one pass). */
+export function sortByTime(pts: Etco2Point[]): Etco2Point[] {
+  for (let i = 1; i < pts.length; i++) {
+    if (pts[i].tSec < pts[i - 1].tSec) {
+      return pts.map((p, k) => ({ p, k })).sort((a, b) => a.p.tSec - b.p.tSec || a.k - b.k).map((x) => x.p);
+    }
+  }
+  return pts;
+}
+
+/**
+ * The trend: windows of `windowSec` from time zero; each window with at least one value
+ * gives the median of its values and the sources that contributed.
+ */
+export function etco2Trend(
+  points: readonly Etco2Point[],
+  windowSec: number = TREND_WINDOW_SEC,
+): Etco2TrendPoint[] {
+  const out: Etco2TrendPoint[] = [];
+  let i = 0;
+  while (i < points.length) {
+    const k = Math.floor(points[i].tSec / windowSec);
+    const vals: number[] = [];
+    const sources = new Set<Etco2Source>();
+    while (i < points.length && Math.floor(points[i].tSec / windowSec) === k) {
+      vals.push(points[i].mmHg);
+      sources.add(points[i].source);
+      i++;
+    }
+    out.push({
+      startSec: k * windowSec,
+      endSec: (k + 1) * windowSec,
+      medianMmHg: median(vals) as number,
+      count: vals.length,
+      sources: [...sources].sort(),
+    });
+  }
+  return out;
+}

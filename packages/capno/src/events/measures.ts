@@ -1,0 +1,78 @@
+import type { Interval, Measures, Pause, PauseContext } from '@upstroke/contracts';
+import { intersect, totalLength } from './intervals.js';
+import { epinephrineTimes, firstOf, type TimedEvent } from './normalize.js';
+import type { Timeline } from './timeline.js';
+
+/** A pause starting this soon after a shock is a post-shock pause (common practice). */
+export const POST_SHOCK_WINDOW_SEC = 10;
+
+const overlaps = (xs: readonly Interval[], s: number, e: number) =>
+  xs.some((x) => x.startSec < e && x.endSec > s);
+
+/**
+ * Classifies a pause by what happened in it: a shock → `pre-shock` (with its pre- and
+ * post-shock parts); starting within 10 s after a shock → `post-shock`; a rhythm or pulse
+ * check → `rhythm-check`; an airway step → `airway`; otherwise `unexplained`.
+ */
+export function classifyPause(events: readonly TimedEvent[], s: number, e: number): Pause {
+  const inside = events.filter((x) => x.tSec >= s && x.tSec <= e);
+  const shocks = inside.filter((x) => x.kind === 'shock');
+  const base = { startSec: s, endSec: e, durationSec: e - s };
+  if (shocks.length > 0) {
+    const preShockSec = shocks[0].tSec - s;
+    const postShockSec = e - shocks[shocks.length - 1].tSec;
+    return { ...base, context: 'pre-shock', preShockSec, postShockSec };
+  }
+  const recentShock = events.some(
+    (x) => x.kind === 'shock' && x.tSec < s && s - x.tSec <= POST_SHOCK_WINDOW_SEC,
+  );
+  let context: PauseContext = 'unexplained';
+  if (recentShock) context = 'post-shock';
+  else if (inside.some((x) => x.kind === 'rhythm' || x.kind === 'pulse')) context = 'rhythm-check';
+  else if (inside.some((x) => x.kind === 'airway')) context = 'airway';
+  return { ...base, context };
+}
+
+/**
+ * Pauses: each gap between one compression interval and the next, unless circulation was
+ * documented during it (ROSC or a pulse), which makes it not a pause but a period of ROSC.
+ */
+export function pausesOf(events: readonly TimedEvent[], tl: Timeline): Pause[] {
+  const out: Pause[] = [];
+  for (let k = 1; k < tl.compressions.length; k++) {
+    const s = tl.compressions[k - 1].endSec;
+    const e = tl.compressions[k].startSec;
+    if (overlaps(tl.rosc, s, e) || overlaps(tl.pulse, s, e)) continue;
+    out.push(classifyPause(events, s, e));
+  }
+  return out;
+}
+
+const diffs = (ts: readonly number[]) => ts.slice(1).map((t, i) => t - ts[i]);
+
+/** Event-derived CPR measures; EtCO2 and ventilation parts are filled in by the caller. */
+export function eventMeasures(
+  events: readonly TimedEvent[],
+  tl: Timeline,
+): Omit<Measures, 'etco2' | 'ventilationRatePerMin'> {
+  const pauses = pausesOf(events, tl);
+  const compressionSec = totalLength(intersect(tl.compressions, tl.noCirculation));
+  const timeWithoutCirculationSec = totalLength(tl.noCirculation);
+  const rhythmTimes = events.filter((e) => e.kind === 'rhythm').map((e) => e.tSec);
+  return {
+    durationSec: tl.endSec,
+    compressionFraction:
+      timeWithoutCirculationSec > 0 ? compressionSec / timeWithoutCirculationSec : null,
+    pauses,
+    longestPauseSec: pauses.length ? Math.max(...pauses.map((p) => p.durationSec)) : null,
+    timeToFirstCompressionSec: firstOf(events, 'compressions-start')?.tSec ?? null,
+    timeToFirstShockSec: firstOf(events, 'shock')?.tSec ?? null,
+    timeToFirstEpinephrineSec: epinephrineTimes(events)[0] ?? null,
+    epinephrineIntervalsSec: diffs(epinephrineTimes(events)),
+    compressionSec,
+    timeWithoutCirculationSec,
+    compressionIntervals: tl.compressions,
+    rhythmCheckIntervalsSec: diffs(rhythmTimes),
+    roscPeriods: tl.rosc,
+  };
+}

@@ -1,0 +1,57 @@
+import { analysisEventSchema, type AnalysisEvent, type EventKind } from '@upstroke/contracts';
+import { secondsFrom } from '../time.js';
+
+/** An event on the analysis clock: `tSec` is seconds from the arrest time. */
+export type TimedEvent = AnalysisEvent & { tSec: number };
+export type TimedEventOf<K extends EventKind> = Extract<TimedEvent, { kind: K }>;
+
+/**
+ * Applies `correction` events, then puts events on the analysis clock, sorted by time
+ * (stable for equal times).
+ *
+ * A correction removes the event it supersedes and, when it carries a replacement
+ * `{kind, data, at}`, adds that event in its place (id = the correction's id). A correction
+ * that is itself superseded by a later correction has no effect. A replacement that does
+ * not match the event schema is dropped (the CLI rejects such input before analysis).
+ */
+export function normalizeEvents(
+  arrestAt: string,
+  events: readonly AnalysisEvent[],
+): TimedEvent[] {
+  const corrections = events.filter((e) => e.kind === 'correction');
+  const supersededIds = new Set(corrections.map((c) => c.data.supersedes));
+  const kept: AnalysisEvent[] = [];
+  for (const e of events) {
+    if (e.kind !== 'correction' && !supersededIds.has(e.id)) kept.push(e);
+  }
+  for (const c of corrections) {
+    if (supersededIds.has(c.id)) continue;
+    const r = c.data.replacement;
+    if (!r) continue;
+    const parsed = analysisEventSchema.safeParse({ id: c.id, ...r });
+    if (parsed.success && parsed.data.kind !== 'correction') kept.push(parsed.data);
+  }
+  const timed = kept.map((e, i) => ({ e: { ...e, tSec: secondsFrom(arrestAt, e.at) }, i }));
+  timed.sort((a, b) => a.e.tSec - b.e.tSec || a.i - b.i);
+  return timed.map((x) => x.e as TimedEvent);
+}
+
+/** Type guard for narrowing a timed event by kind. */
+export function isKind<K extends EventKind>(e: TimedEvent, kind: K): e is TimedEventOf<K> {
+  return e.kind === kind;
+}
+
+/** The first event of a kind matching an optional predicate, or undefined. */
+export function firstOf<K extends EventKind>(
+  events: readonly TimedEvent[],
+  kind: K,
+  pred: (e: TimedEventOf<K>) => boolean = () => true,
+): TimedEventOf<K> | undefined {
+  for (const e of events) if (isKind(e, kind) && pred(e)) return e;
+  return undefined;
+}
+
+/** Times of epinephrine doses, in order. */
+export function epinephrineTimes(events: readonly TimedEvent[]): number[] {
+  return events.filter((e) => isKind(e, 'drug') && e.data.drug === 'epinephrine').map((e) => e.tSec);
+}

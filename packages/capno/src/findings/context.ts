@@ -1,0 +1,57 @@
+import type {
+  Breath,
+  Etco2Point,
+  Finding,
+  FindingKind,
+  Interval,
+  Pause,
+  Severity,
+  Thresholds,
+} from '@upstroke/contracts';
+import type { Etco2Segment } from '../etco2/segments.js';
+import type { TimedEvent } from '../events/normalize.js';
+import type { Timeline } from '../events/timeline.js';
+
+/** Everything the finding rules read; built once per analysis (or per live refresh). */
+export interface FindingContext {
+  t: Thresholds;
+  events: readonly TimedEvent[];
+  tl: Timeline;
+  pauses: readonly Pause[];
+  points: readonly Etco2Point[];
+  segments: readonly Etco2Segment[];
+  breaths: readonly Breath[];
+  /** Times covered by waveform samples (no waveform → empty: absence cannot be judged). */
+  waveformCoverage: readonly Interval[];
+  /** Live use: the record is still open at `tl.endSec`, so open states (a pause) are ongoing. */
+  live: boolean;
+}
+
+/** Shown with every finding: Upstroke supports documentation and review, never treatment. */
+export const CAUTION =
+  'Decision support only, not a diagnosis: follow your local resuscitation protocol and ' +
+  "clinical judgement. Thresholds are your site's settings.";
+
+/** Whole seconds or mmHg for messages. */
+export const fmt = (x: number) => String(Math.round(x));
+
+export function finding(
+  kind: FindingKind,
+  startSec: number,
+  endSec: number,
+  severity: Severity,
+  message: string,
+  confounder: Finding['confounder'] = null,
+  caution: string = CAUTION,
+): Finding {
+  return { kind, startSec, endSec, severity, message, caution, confounder };
+}
+
+export const overlaps = (xs: readonly Interval[], s: number, e: number) =>
+  xs.some((x) => x.startSec < e && x.endSec > s);
+
+/** Whether compressions are still going at the end of the record (an open interval). */
+export function compressionsRunningAtEnd(tl: Timeline): boolean {
+  const last = tl.compressions[tl.compressions.length - 1];
+  return last !== undefined && last.endSec >= tl.endSec;
+}

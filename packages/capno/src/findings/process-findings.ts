@@ -1,0 +1,111 @@
+import type { Finding } from '@upstroke/contracts';
+import { epinephrineTimes } from '../events/normalize.js';
+import { classifyPause } from '../events/measures.js';
+import {
+  compressionsRunningAtEnd,
+  finding,
+  fmt,
+  overlaps,
+  type FindingContext,
+} from './context.js';
+
+/** In live use, compressions stopped and not restarted (no ROSC, pulse or end since): a pause in progress. */
+function ongoingPause(c: FindingContext) {
+  const last = c.tl.compressions[c.tl.compressions.length - 1];
+  if (!c.live || !last || last.endSec >= c.tl.endSec) return [];
+  const after = c.events.filter((e) => e.tSec >= last.endSec);
+  if (after.some((e) => ['rosc', 'end'].includes(e.kind) || (e.kind === 'pulse' && e.data.present)))
+    return [];
+  return [classifyPause(c.events, last.endSec, c.tl.endSec)];
+}
+
+/**
+ * `pause-long`: a pause longer than `pauseMaxSec` (warning; critical at twice the limit).
+ * `preshock-pause-long`: compressions stopping → shock longer than `preshockPauseMaxSec`
+ * (warning; critical from 20 s — Cheskes 2011: ≥ 20 s, odds ratio 0.47 for survival).
+ */
+export function pauseFindings(c: FindingContext): Finding[] {
+  const out: Finding[] = [];
+  for (const p of [...c.pauses, ...ongoingPause(c)]) {
+    if (p.durationSec > c.t.pauseMaxSec) {
+      const sev = p.durationSec >= 2 * c.t.pauseMaxSec ? 'critical' : 'warning';
+      const msg = `Compressions paused for ${fmt(p.durationSec)} s (${p.context}), longer than the ${fmt(c.t.pauseMaxSec)} s target. Long pauses suggest room to shorten interruptions; consider planning tasks before stopping.`;
+      out.push(finding('pause-long', p.startSec, p.endSec, sev, msg));
+    }
+    const pre = p.preShockSec;
+    if (pre !== undefined && pre > c.t.preshockPauseMaxSec) {
+      const sev = pre >= 20 ? 'critical' : 'warning';
+      const msg = `The pre-shock pause lasted ${fmt(pre)} s, longer than ${fmt(c.t.preshockPauseMaxSec)} s. Shorter pre-shock pauses are associated with better outcomes; consider charging the defibrillator during compressions.`;
+      out.push(finding('preshock-pause-long', p.startSec, p.startSec + pre, sev, msg));
+    }
+  }
+  return out;
+}
+
+/** Points from which the next rhythm check is due: first compressions, each check, each restart after circulation. */
+function checkReferences(c: FindingContext): number[] {
+  const refs: number[] = [];
+  const circulation = [...c.tl.rosc, ...c.tl.pulse];
+  for (const e of c.events) {
+    if (e.kind === 'rhythm') refs.push(e.tSec);
+    else if (e.kind === 'compressions-start') {
+      const first = !c.events.some((x) => x.kind === 'compressions-start' && x.tSec < e.tSec);
+      if (first || circulation.some((x) => x.endSec === e.tSec)) refs.push(e.tSec);
+    }
+  }
+  return refs.sort((a, b) => a - b);
+}
+
+/**
+ * `rhythm-check-late`: more than `rhythmCheckIntervalSec` + tolerance from one rhythm check
+ * (or the start of compressions) to the next, without circulation in between; an overdue
+ * check at the end counts only while compressions are still running. Finding spans from
+ * when the check was due to when it happened (or the end). Warning.
+ */
+export function rhythmCheckFindings(c: FindingContext): Finding[] {
+  const out: Finding[] = [];
+  const refs = checkReferences(c);
+  const circulation = [...c.tl.rosc, ...c.tl.pulse];
+  const limit = c.t.rhythmCheckIntervalSec + c.t.rhythmCheckToleranceSec;
+  for (let k = 0; k < refs.length; k++) {
+    const a = refs[k];
+    const open = k + 1 >= refs.length;
+    if (open && !compressionsRunningAtEnd(c.tl)) continue;
+    const b = open ? c.tl.endSec : refs[k + 1];
+    if (b - a <= limit || overlaps(circulation, a, b)) continue;
+    const msg = open
+      ? `No rhythm check recorded for ${fmt(b - a)} s (due every ${fmt(c.t.rhythmCheckIntervalSec)} s); consider whether a rhythm check is due.`
+      : `The rhythm check came ${fmt(b - a)} s after the previous one, later than the ${fmt(c.t.rhythmCheckIntervalSec)} s cycle plus ${fmt(c.t.rhythmCheckToleranceSec)} s tolerance.`;
+    out.push(finding('rhythm-check-late', a + c.t.rhythmCheckIntervalSec, b, 'warning', msg));
+  }
+  return out;
+}
+
+/**
+ * `epinephrine-interval`: an interval between doses shorter than `epinephrineMinSec` or
+ * longer than `epinephrineMaxSec` (both without circulation in between), or no further
+ * dose within `epinephrineMaxSec` while compressions continue at the end. Warning.
+ */
+export function epinephrineFindings(c: FindingContext): Finding[] {
+  const out: Finding[] = [];
+  const ts = epinephrineTimes(c.events);
+  const circulation = [...c.tl.rosc, ...c.tl.pulse];
+  const { epinephrineMinSec: min, epinephrineMaxSec: max } = c.t;
+  const range = `${fmt(min / 60)}–${fmt(max / 60)} min`;
+  for (let k = 1; k < ts.length; k++) {
+    const [a, b] = [ts[k - 1], ts[k]];
+    if ((b - a >= min && b - a <= max) || overlaps(circulation, a, b)) continue;
+    const side = b - a < min ? 'shorter' : 'longer';
+    const msg = `Epinephrine doses ${fmt(b - a)} s apart, ${side} than the ${range} interval of the protocol; consider reviewing the timing of doses.`;
+    out.push(finding('epinephrine-interval', a, b, 'warning', msg));
+  }
+  const last = ts[ts.length - 1];
+  const end = c.tl.endSec;
+  if (last !== undefined && end - last > max && compressionsRunningAtEnd(c.tl)) {
+    if (!overlaps(circulation, last, end)) {
+      const msg = `No further epinephrine recorded ${fmt(end - last)} s after the last dose (protocol interval ${range}); consider whether a dose is due.`;
+      out.push(finding('epinephrine-interval', last + max, end, 'warning', msg));
+    }
+  }
+  return out;
+}

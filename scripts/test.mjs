@@ -1,0 +1,225 @@
+// `npm test`: set-up on a throwaway database, then lint, type-check, unit and integration
+// suites and the browser end-to-end tests. Exits non-zero on any failure.
+import { spawn } from 'node:child_process';
+import fs from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { migrateAndSeed } from './lib/build.mjs';
+import { ensureDependencies } from './lib/deps.mjs';
+import { ensureDatabase, startCluster } from './lib/postgres.mjs';
+import { aptInstall, capture, log, runAsync } from './lib/run.mjs';
+import { countsOf } from './lib/test-counts.mjs';
+import { waitForHttp } from './lib/wait.mjs';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const work = path.join(root, '.local', `test-${process.pid}`);
+const pgPort = Number(process.env.TEST_PG_PORT ?? 54339);
+const appPort = Number(process.env.TEST_PORT ?? 8091);
+const smtpPort = Number(process.env.TEST_SMTP_PORT ?? 2526);
+const cleanups = [];
+const results = [];
+
+function cleanup() {
+  while (cleanups.length) {
+    try {
+      cleanups.pop()();
+    } catch {
+      // Keep cleaning.
+    }
+  }
+}
+
+function ensureSystemPackages() {
+  const missing = [];
+  if (!fs.existsSync('/usr/bin/chromium')) missing.push('chromium');
+  if (capture('pdffonts', ['-v']).status !== 0 && !fs.existsSync('/usr/bin/pdffonts'))
+    missing.push('poppler-utils');
+  if (capture('/usr/bin/python3', ['-c', 'import scipy.signal']).status !== 0)
+    missing.push('python3-scipy');
+  if (missing.length) aptInstall(missing);
+}
+
+async function step(name, cmd, args, options = {}) {
+  log(`── ${name}`);
+  const started = Date.now();
+  const code = await runAsync(cmd, args, { cwd: root, ...options });
+  const counts = options.countsFile ? countsOf(options.countsFile) : null;
+  results.push({ name, ok: code === 0, counts, seconds: (Date.now() - started) / 1000 });
+  return code === 0;
+}
+
+function startServer(env) {
+  const server = spawn('node', ['api/dist/src/main.js'], {
+    cwd: root,
+    env,
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  cleanups.push(() => server.kill('SIGTERM'));
+  return server;
+}
+
+async function main() {
+  ensureDependencies(root);
+  ensureSystemPackages();
+  fs.mkdirSync(work, { recursive: true });
+  cleanups.push(() => fs.rmSync(work, { recursive: true, force: true }));
+  const cluster = startCluster({
+    dataDir: path.join(work, 'pg'),
+    runDir: path.join(work, 'run'),
+    port: pgPort,
+    fast: true,
+  });
+  cleanups.push(cluster.stop);
+  const databaseUrl = ensureDatabase({
+    bin: cluster.bin,
+    port: pgPort,
+    name: 'upstroke_test',
+    drop: true,
+  });
+  const apiDbUrl = ensureDatabase({
+    bin: cluster.bin,
+    port: pgPort,
+    name: 'upstroke_api_test',
+    drop: true,
+  });
+  migrateAndSeed(root, databaseUrl);
+  const env = {
+    ...process.env,
+    DATABASE_URL: databaseUrl,
+    NODE_OPTIONS: '--conditions=upstroke-source',
+  };
+  const out = (name) => path.join(work, name);
+
+  await step('lint (ESLint, zero warnings)', 'npx', ['eslint', '.', '--max-warnings', '0']);
+  await step('format (Prettier)', 'npx', ['prettier', '--check', '--log-level', 'warn', '.']);
+  const built = await step('type-check and build (tsc -b, vite build)', 'node', [
+    'scripts/lib/build-cli.mjs',
+  ]);
+  await step(
+    'unit tests (vitest: packages, web)',
+    'npx',
+    [
+      'vitest',
+      'run',
+      '--reporter=default',
+      '--reporter=json',
+      `--outputFile.json=${out('vitest.json')}`,
+    ],
+    { env, countsFile: out('vitest.json') },
+  );
+  await step(
+    'API tests (jest + supertest, real PostgreSQL)',
+    'npx',
+    ['jest', '--runInBand', '--json', `--outputFile=${out('jest.json')}`],
+    {
+      cwd: path.join(root, 'api'),
+      env: { ...env, TEST_DATABASE_URL: apiDbUrl },
+      countsFile: out('jest.json'),
+    },
+  );
+  if (built) {
+    const server = startServer({
+      ...process.env,
+      NODE_ENV: 'production',
+      LOG_LEVEL: 'warn',
+      PORT: String(appPort),
+      DATABASE_URL: databaseUrl,
+      WEB_DIST: path.join(root, 'web', 'dist'),
+      SMTP_SINK_PORT: String(smtpPort),
+      SMTP_PORT: String(smtpPort),
+      PUBLIC_URL: `http://localhost:${appPort}`,
+      JWT_SECRET: 'e2e-secret',
+      LOGIN_LIMIT_PER_MINUTE: '200',
+    });
+    const up = await waitForHttp(`http://127.0.0.1:${appPort}/api/health`, 30_000, server);
+    if (!up)
+      results.push({
+        name: 'start the app for end-to-end tests',
+        ok: false,
+        counts: null,
+        seconds: 0,
+      });
+    else {
+      await step(
+        'end-to-end tests (playwright-core + Debian Chromium)',
+        'node',
+        [
+          '--conditions=upstroke-source',
+          '--import',
+          'tsx',
+          '--test',
+          '--test-concurrency=1',
+          '--test-reporter=spec',
+          '--test-reporter-destination=stdout',
+          '--test-reporter=tap',
+          `--test-reporter-destination=${out('e2e.tap')}`,
+          ...e2eFiles(),
+        ],
+        {
+          env: {
+            ...env,
+            E2E_BASE_URL: `http://localhost:${appPort}`,
+            E2E_DATABASE_URL: databaseUrl,
+            E2E_SMTP_PORT: String(smtpPort),
+          },
+          countsFile: out('e2e.tap'),
+        },
+      );
+    }
+  } else {
+    results.push({
+      name: 'end-to-end tests (not run: the build failed)',
+      ok: false,
+      counts: null,
+      seconds: 0,
+    });
+  }
+}
+
+function e2eFiles() {
+  const dir = path.join(root, 'e2e', 'tests');
+  return fs
+    .readdirSync(dir)
+    .filter((f) => f.endsWith('.spec.ts'))
+    .sort()
+    .map((f) => path.join('e2e', 'tests', f));
+}
+
+function summarise() {
+  let passed = 0;
+  let failed = 0;
+  process.stdout.write('\nUpstroke test summary\n');
+  for (const r of results) {
+    const c = r.counts;
+    const detail = c ? `${c.passed} passed, ${c.failed} failed` : r.ok ? 'ok' : 'FAILED';
+    process.stdout.write(
+      `  ${r.ok ? 'ok  ' : 'FAIL'} ${r.name}: ${detail} (${r.seconds.toFixed(1)} s)\n`,
+    );
+    if (c) {
+      passed += c.passed;
+      failed += c.failed;
+    }
+    // A failing step without test counts (lint, type-check, a crashed runner) counts as one failure.
+    if (!r.ok && (!c || c.failed === 0)) failed += 1;
+  }
+  process.stdout.write(`\n${passed} passed, ${failed} failed\n`);
+  return failed === 0 && results.every((r) => r.ok);
+}
+
+process.on('SIGINT', () => {
+  cleanup();
+  process.exit(130);
+});
+let ok = false;
+try {
+  await main();
+  ok = summarise();
+} catch (error) {
+  process.stderr.write(
+    `npm test set-up failed: ${error instanceof Error ? error.message : String(error)}\n`,
+  );
+  summarise();
+} finally {
+  cleanup();
+}
+process.exit(ok ? 0 : 1);
