@@ -1,1 +1,17 @@
-export {};
+/**
+ * @upstroke/capno — the EtCO2 and CPR analysis engine (PRODUCT.md "The computation").
+ * Pure, deterministic TypeScript: no I/O, runs in the browser and in Node.
+ */
+export { analyze, analyzeCore, ventilationRate, type CoreInput } from './analyze.js';
+export { BreathDetector, detectBreaths, type DetectedBreath } from './breaths/breath-detector.js';
+export { detectorDefaults, type DetectorOptions } from './breaths/options.js';
+export { etco2Series, etco2Trend, TREND_WINDOW_SEC } from './etco2/series.js';
+export { etco2Measures, MAX_HOLD_SEC, stepSegments } from './etco2/segments.js';
+export { normalizeEvents, type TimedEvent } from './events/normalize.js';
+export { buildTimeline, type Timeline } from './events/timeline.js';
+export { CAUTION } from './findings/index.js';
+export { LiveAnalyzer, type LiveOptions } from './live/live-analyzer.js';
+export { resolveThresholds } from './profile.js';
+export { summarize } from './summary.js';
+export { arrayToMmHg, DEFAULT_BAROMETRIC_MMHG, MMHG_PER_KPA, mmHgFactor, toMmHg } from './units.js';
+export * from './synth.js';

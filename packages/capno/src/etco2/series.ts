@@ -33,7 +33,10 @@ export function etco2Series(
 export function sortByTime(pts: Etco2Point[]): Etco2Point[] {
   for (let i = 1; i < pts.length; i++) {
     if (pts[i].tSec < pts[i - 1].tSec) {
-      return pts.map((p, k) => ({ p, k })).sort((a, b) => a.p.tSec - b.p.tSec || a.k - b.k).map((x) => x.p);
+      return pts
+        .map((p, k) => ({ p, k }))
+        .sort((a, b) => a.p.tSec - b.p.tSec || a.k - b.k)
+        .map((x) => x.p);
     }
   }
   return pts;

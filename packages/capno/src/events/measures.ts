@@ -6,6 +6,18 @@ import type { Timeline } from './timeline.js';
 /** A pause starting this soon after a shock is a post-shock pause (common practice). */
 export const POST_SHOCK_WINDOW_SEC = 10;
 
+/** First index with tSec ≥ t (or > t when `after`), by bisection over time-sorted events. */
+function lowerBound(events: readonly TimedEvent[], t: number, lo = 0, after = false): number {
+  let hi = events.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    const v = events[mid].tSec;
+    if (v < t || (after && v === t)) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
 const overlaps = (xs: readonly Interval[], s: number, e: number) =>
   xs.some((x) => x.startSec < e && x.endSec > s);
 
@@ -15,7 +27,9 @@ const overlaps = (xs: readonly Interval[], s: number, e: number) =>
  * check → `rhythm-check`; an airway step → `airway`; otherwise `unexplained`.
  */
 export function classifyPause(events: readonly TimedEvent[], s: number, e: number): Pause {
-  const inside = events.filter((x) => x.tSec >= s && x.tSec <= e);
+  const from = lowerBound(events, s - POST_SHOCK_WINDOW_SEC);
+  const near = events.slice(from, lowerBound(events, e, from, true));
+  const inside = near.filter((x) => x.tSec >= s);
   const shocks = inside.filter((x) => x.kind === 'shock');
   const base = { startSec: s, endSec: e, durationSec: e - s };
   if (shocks.length > 0) {
@@ -23,7 +37,7 @@ export function classifyPause(events: readonly TimedEvent[], s: number, e: numbe
     const postShockSec = e - shocks[shocks.length - 1].tSec;
     return { ...base, context: 'pre-shock', preShockSec, postShockSec };
   }
-  const recentShock = events.some(
+  const recentShock = near.some(
     (x) => x.kind === 'shock' && x.tSec < s && s - x.tSec <= POST_SHOCK_WINDOW_SEC,
   );
   let context: PauseContext = 'unexplained';

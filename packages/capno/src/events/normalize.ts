@@ -1,8 +1,18 @@
-import { analysisEventSchema, type AnalysisEvent, type EventKind } from '@upstroke/contracts';
+import {
+  analysisEventSchema,
+  type AnalysisEvent,
+  type AnalysisInput,
+  type EventKind,
+} from '@upstroke/contracts';
 import { secondsFrom } from '../time.js';
 
 /** An event on the analysis clock: `tSec` is seconds from the arrest time. */
 export type TimedEvent = AnalysisEvent & { tSec: number };
+/**
+ * An event as `analysisInputSchema` infers it. The schema pairs each kind with its data,
+ * but the inferred type does not say so; once validated it is an `AnalysisEvent`.
+ */
+export type InputEvent = AnalysisInput['events'][number] | AnalysisEvent;
 export type TimedEventOf<K extends EventKind> = Extract<TimedEvent, { kind: K }>;
 
 /**
@@ -14,11 +24,9 @@ export type TimedEventOf<K extends EventKind> = Extract<TimedEvent, { kind: K }>
  * that is itself superseded by a later correction has no effect. A replacement that does
  * not match the event schema is dropped (the CLI rejects such input before analysis).
  */
-export function normalizeEvents(
-  arrestAt: string,
-  events: readonly AnalysisEvent[],
-): TimedEvent[] {
-  const corrections = events.filter((e) => e.kind === 'correction');
+export function normalizeEvents(arrestAt: string, input: readonly InputEvent[]): TimedEvent[] {
+  const events = input as readonly AnalysisEvent[];
+  const corrections = events.filter((e) => isCorrection(e));
   const supersededIds = new Set(corrections.map((c) => c.data.supersedes));
   const kept: AnalysisEvent[] = [];
   for (const e of events) {
@@ -29,11 +37,16 @@ export function normalizeEvents(
     const r = c.data.replacement;
     if (!r) continue;
     const parsed = analysisEventSchema.safeParse({ id: c.id, ...r });
-    if (parsed.success && parsed.data.kind !== 'correction') kept.push(parsed.data);
+    if (parsed.success && parsed.data.kind !== 'correction')
+      kept.push(parsed.data as AnalysisEvent);
   }
   const timed = kept.map((e, i) => ({ e: { ...e, tSec: secondsFrom(arrestAt, e.at) }, i }));
   timed.sort((a, b) => a.e.tSec - b.e.tSec || a.i - b.i);
   return timed.map((x) => x.e as TimedEvent);
+}
+
+function isCorrection(e: AnalysisEvent): e is Extract<AnalysisEvent, { kind: 'correction' }> {
+  return e.kind === 'correction';
 }
 
 /** Type guard for narrowing a timed event by kind. */
@@ -53,5 +66,7 @@ export function firstOf<K extends EventKind>(
 
 /** Times of epinephrine doses, in order. */
 export function epinephrineTimes(events: readonly TimedEvent[]): number[] {
-  return events.filter((e) => isKind(e, 'drug') && e.data.drug === 'epinephrine').map((e) => e.tSec);
+  return events
+    .filter((e) => isKind(e, 'drug') && e.data.drug === 'epinephrine')
+    .map((e) => e.tSec);
 }

@@ -37,7 +37,8 @@ export function ventilationFindings(c: FindingContext): Finding[] {
     if (r === null || r <= limit) continue;
     let j = i;
     let peak = r;
-    while (j + 1 < rates.length && (rates[j + 1] ?? 0) > limit) peak = Math.max(peak, rates[++j] ?? 0);
+    while (j + 1 < rates.length && (rates[j + 1] ?? 0) > limit)
+      peak = Math.max(peak, rates[++j] ?? 0);
     const start = Math.max(0, c.breaths[i].tSec - RATE_WINDOW_SEC, c.breaths[0].tSec);
     out.push(finding('ventilation-fast', start, c.breaths[j].tSec, 'warning', msg(peak)));
     i = j;
@@ -79,7 +80,10 @@ export function waveformAbsentFindings(c: FindingContext): Finding[] {
   return out;
 }
 
-/** `airway-unconfirmed`: a tracheal tube recorded without waveform-capnography confirmation (none later either). Warning. */
+/**
+ * `airway-unconfirmed`: a tracheal tube recorded without waveform-capnography confirmation,
+ * and none recorded later; spans the time the tube stayed in place. Warning.
+ */
 export function airwayUnconfirmedFindings(c: FindingContext): Finding[] {
   const tubes = c.events.filter((e) => isKind(e, 'airway') && e.data.device === 'tracheal-tube');
   const confirmed = (e: (typeof tubes)[number]) =>
@@ -88,7 +92,8 @@ export function airwayUnconfirmedFindings(c: FindingContext): Finding[] {
     .filter((e, k) => !tubes.slice(k).some(confirmed))
     .map((e) => {
       const msg = `A tracheal tube was recorded at ${fmt(e.tSec)} s without waveform capnography confirmation. A sustained waveform is the recommended confirmation; consider confirming it and recording the confirmation.`;
-      return finding('airway-unconfirmed', e.tSec, e.tSec, 'warning', msg);
+      const inPlace = c.tl.trachealTube.find((x) => x.startSec <= e.tSec && x.endSec >= e.tSec);
+      return finding('airway-unconfirmed', e.tSec, inPlace?.endSec ?? e.tSec, 'warning', msg);
     });
 }
 
@@ -103,7 +108,9 @@ export function rebreathingFindings(c: FindingContext): Finding[] {
     if (j - i + 1 >= REBREATHING_MIN_BREATHS) {
       const top = Math.max(...b.slice(i, j + 1).map((x) => x.baselineMmHg));
       const msg = `Inspired CO2 stayed above ${fmt(c.t.rebreathingBaselineMmHg)} mmHg for ${j - i + 1} breaths (up to ${fmt(top)} mmHg). This suggests rebreathing; consider checking the valve, circuit and sampling line.`;
-      out.push(finding('rebreathing', b[i].tSec, b[j].tSec + (b[j].durationSec ?? 0), 'warning', msg));
+      out.push(
+        finding('rebreathing', b[i].tSec, b[j].tSec + (b[j].durationSec ?? 0), 'warning', msg),
+      );
     }
     i = j;
   }

@@ -53,7 +53,8 @@ function riseFinding(c: FindingContext, s: number, e: number, base: number, peak
   const conf = confounderAt(c, s);
   let msg = `EtCO2 rose ${fmt(peak - base)} mmHg above the preceding ${fmt(c.t.riseBaselineSec)} s (from about ${fmt(base)} to ${fmt(peak)} mmHg) and stayed up for ${fmt(e - s)} s. An abrupt sustained rise suggests return of spontaneous circulation; consider a pulse check at the next pause.`;
   if (conf === 'sodium-bicarbonate')
-    msg += ' Sodium bicarbonate was given shortly before; it raises EtCO2 for minutes and can mimic this rise.';
+    msg +=
+      ' Sodium bicarbonate was given shortly before; it raises EtCO2 for minutes and can mimic this rise.';
   if (conf === 'ventilation')
     msg += ' Ventilation changed shortly before; a slower ventilation rate also raises EtCO2.';
   return finding('etco2-rise', s, e, 'info', msg, conf);
@@ -109,5 +110,7 @@ export function prognosisFindings(c: FindingContext): Finding[] {
   const rise = c.points.find((p) => p.tSec > at && p.mmHg >= c.t.prognosisEtco2MmHg);
   const msg = `After ${fmt((at - cpr0) / 60)} min of CPR with an advanced airway, EtCO2 is still below ${fmt(c.t.prognosisEtco2MmHg)} mmHg (median ${fmt(m)} mmHg over the last minute). Published studies associate this with a low chance of ROSC; it is one input among several.`;
   const caution = `${CAUTION} Never use EtCO2 alone to decide to stop resuscitation.`;
-  return [finding('etco2-prognosis-caution', at, rise?.tSec ?? c.tl.endSec, 'info', msg, null, caution)];
+  return [
+    finding('etco2-prognosis-caution', at, rise?.tSec ?? c.tl.endSec, 'info', msg, null, caution),
+  ];
 }

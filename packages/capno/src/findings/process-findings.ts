@@ -46,11 +46,12 @@ export function pauseFindings(c: FindingContext): Finding[] {
 function checkReferences(c: FindingContext): number[] {
   const refs: number[] = [];
   const circulation = [...c.tl.rosc, ...c.tl.pulse];
+  let seenCompressions = false;
   for (const e of c.events) {
     if (e.kind === 'rhythm') refs.push(e.tSec);
     else if (e.kind === 'compressions-start') {
-      const first = !c.events.some((x) => x.kind === 'compressions-start' && x.tSec < e.tSec);
-      if (first || circulation.some((x) => x.endSec === e.tSec)) refs.push(e.tSec);
+      if (!seenCompressions || circulation.some((x) => x.endSec === e.tSec)) refs.push(e.tSec);
+      seenCompressions = true;
     }
   }
   return refs.sort((a, b) => a - b);

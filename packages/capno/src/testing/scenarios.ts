@@ -20,11 +20,30 @@ export function synthScenario(name: SynthScenarioName, seed = 1): Partial<SynthO
   };
   switch (name) {
     case 'poor-cpr':
-      return { ...common, levels: [[0, 8], [300, 7], [600, 8]] };
+      return {
+        ...common,
+        levels: [
+          [0, 8],
+          [300, 7],
+          [600, 8],
+        ],
+      };
     case 'improving-cpr':
-      return { ...common, levels: [[0, 8], [240, 12], [420, 22], [600, 24]] };
+      return {
+        ...common,
+        levels: [
+          [0, 8],
+          [240, 12],
+          [420, 22],
+          [600, 24],
+        ],
+      };
     case 'rosc':
-      return { ...common, levels: [[0, 18]], modifiers: [{ kind: 'rosc', atSec: 360, riseMmHg: 20 }] };
+      return {
+        ...common,
+        levels: [[0, 18]],
+        modifiers: [{ kind: 'rosc', atSec: 360, riseMmHg: 20 }],
+      };
     case 'dislodged-tube':
       return { ...common, levels: [[0, 20]], modifiers: [{ kind: 'dislodged', atSec: 300 }] };
   }
