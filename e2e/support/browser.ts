@@ -1,0 +1,48 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
+import { baseUrl, type DemoRole, demoPassword, emailOf } from './env';
+
+/** Debian's Chromium, headless, with the flags this closed network needs. */
+export async function launchBrowser(): Promise<{ browser: Browser; close: () => Promise<void> }> {
+  const userDataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'upstroke-e2e-'));
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      `--user-data-dir=${userDataDir}`,
+    ],
+  });
+  return {
+    browser,
+    close: async () => {
+      await browser.close();
+      fs.rmSync(userDataDir, { recursive: true, force: true });
+    },
+  };
+}
+
+/** A tablet-sized context (landscape 1280×800) on the app under test. */
+export function newTabletContext(browser: Browser): Promise<BrowserContext> {
+  return browser.newContext({
+    baseURL: baseUrl,
+    viewport: { width: 1280, height: 800 },
+    serviceWorkers: 'allow',
+  });
+}
+
+/** Signs in through the real Sign in page, as a person would. */
+export async function signIn(page: Page, role: DemoRole): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('Email').fill(emailOf(role));
+  await page.getByLabel('Password').fill(demoPassword);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('button', { name: 'Sign out' }).waitFor();
+}

@@ -1,0 +1,66 @@
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { SignInPage } from '../features/auth/components/sign-in-page';
+import { Layout } from './layout';
+import { RequireAuth } from './require-auth';
+import { NotFoundPage } from './routes/not-found';
+import { Placeholder } from './routes/placeholder';
+
+/** Screens inside the signed-in frame; each names the roles that may open it. */
+export const appRoutes: RouteObject[] = [
+  {
+    index: true,
+    element: (
+      <RequireAuth roles={['recorder', 'lead', 'quality']}>
+        <Placeholder title="Board" text="Resuscitations in progress and recent records." />
+      </RequireAuth>
+    ),
+  },
+  {
+    path: 'live/:id',
+    element: (
+      <RequireAuth roles={['recorder', 'lead']}>
+        <Placeholder title="Live" text="Live recording." />
+      </RequireAuth>
+    ),
+  },
+  {
+    path: 'debrief/:id',
+    element: (
+      <RequireAuth roles={['recorder', 'lead', 'quality']}>
+        <Placeholder title="Debrief" text="Timeline, measures and findings." />
+      </RequireAuth>
+    ),
+  },
+  {
+    path: 'trends',
+    element: (
+      <RequireAuth roles={['quality', 'admin', 'lead']}>
+        <Placeholder title="Trends" text="Quality measures across codes and units." />
+      </RequireAuth>
+    ),
+  },
+  {
+    path: 'review',
+    element: (
+      <RequireAuth roles={['quality']}>
+        <Placeholder title="Review queue" text="Signed records awaiting review." />
+      </RequireAuth>
+    ),
+  },
+  {
+    path: 'admin/*',
+    element: (
+      <RequireAuth roles={['admin']}>
+        <Placeholder title="Admin" text="Users, sites, protocol profiles, audit log." />
+      </RequireAuth>
+    ),
+  },
+  { path: '*', element: <NotFoundPage /> },
+];
+
+export function createRouter() {
+  return createBrowserRouter([
+    { path: '/sign-in', element: <SignInPage /> },
+    { path: '/', element: <Layout />, children: appRoutes },
+  ]);
+}

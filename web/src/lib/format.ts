@@ -1,0 +1,19 @@
+/** "m:ss" (or "h:mm:ss") for a number of seconds; "—" for none. */
+export function formatDuration(totalSec: number | null | undefined): string {
+  if (totalSec === null || totalSec === undefined || !Number.isFinite(totalSec)) return '—';
+  const s = Math.max(0, Math.round(totalSec));
+  const h = Math.floor(s / 3600);
+  const m = Math.floor((s % 3600) / 60);
+  const sec = String(s % 60).padStart(2, '0');
+  return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${sec}` : `${m}:${sec}`;
+}
+
+export function formatPercent(fraction: number | null | undefined, digits = 0): string {
+  if (fraction === null || fraction === undefined || !Number.isFinite(fraction)) return '—';
+  return `${(fraction * 100).toFixed(digits)} %`;
+}
+
+export function formatDateTime(iso: string | null | undefined): string {
+  if (!iso) return '—';
+  return new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+}
