@@ -2,6 +2,12 @@
  * @upstroke/capno — the EtCO2 and CPR analysis engine (PRODUCT.md "The computation").
  * Pure, deterministic TypeScript: no I/O, runs in the browser and in Node.
  */
+export {
+  alignClocks,
+  alignDefaults,
+  type AlignOptions,
+  type ClockAlignment,
+} from './align/align-clocks.js';
 export { analyze, analyzeCore, ventilationRate, type CoreInput } from './analyze.js';
 export { BreathDetector, detectBreaths, type DetectedBreath } from './breaths/breath-detector.js';
 export { detectorDefaults, type DetectorOptions } from './breaths/options.js';
@@ -13,5 +19,12 @@ export { CAUTION } from './findings/index.js';
 export { LiveAnalyzer, type LiveOptions } from './live/live-analyzer.js';
 export { resolveThresholds } from './profile.js';
 export { summarize } from './summary.js';
+export {
+  buildSummaryRow,
+  joinWaveform,
+  storedRecordInput,
+  type StoredRecord,
+  type StoredWaveformChunk,
+} from './summary-row.js';
 export { arrayToMmHg, DEFAULT_BAROMETRIC_MMHG, MMHG_PER_KPA, mmHgFactor, toMmHg } from './units.js';
 export * from './synth.js';
