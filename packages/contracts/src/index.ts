@@ -4,3 +4,4 @@ export * from './events.js';
 export * from './profile.js';
 export * from './analysis.js';
 export * from './resuscitations.js';
+export * from './monitor.js';
