@@ -8,6 +8,7 @@ import { DatabaseModule } from './db/database.module';
 import { AuditModule } from './modules/audit/audit.module';
 import { AuthModule } from './modules/auth/auth.module';
 import { HealthModule } from './modules/health/health.module';
+import { LinkModule } from './modules/link/link.module';
 import { ResuscitationsModule } from './modules/resuscitations/resuscitations.module';
 
 @Module({})
@@ -30,6 +31,7 @@ export class AppModule {
         AuditModule,
         AuthModule,
         HealthModule,
+        LinkModule,
         ResuscitationsModule,
       ],
       providers: [
