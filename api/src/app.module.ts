@@ -10,6 +10,7 @@ import { AuthModule } from './modules/auth/auth.module';
 import { HealthModule } from './modules/health/health.module';
 import { LinkModule } from './modules/link/link.module';
 import { ResuscitationsModule } from './modules/resuscitations/resuscitations.module';
+import { SummariesModule } from './modules/summaries/summaries.module';
 
 @Module({})
 export class AppModule {
@@ -33,6 +34,7 @@ export class AppModule {
         HealthModule,
         LinkModule,
         ResuscitationsModule,
+        SummariesModule,
       ],
       providers: [
         { provide: APP_CONFIG, useValue: config },

@@ -19,4 +19,7 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'POST /api/resuscitations/{id}/events/batch': clinical,
   'POST /api/resuscitations/{id}/etco2/batch': clinical,
   'POST /api/resuscitations/{id}/waveform/batch': clinical,
+  'GET /api/resuscitations/{id}/debrief': readers,
+  'POST /api/resuscitations/{id}/sign': ['lead'],
+  'POST /api/resuscitations/{id}/amendments': ['lead'],
 };

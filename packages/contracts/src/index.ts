@@ -5,3 +5,4 @@ export * from './profile.js';
 export * from './analysis.js';
 export * from './resuscitations.js';
 export * from './monitor.js';
+export * from './quality.js';

@@ -1,0 +1,10 @@
+import { Module } from '@nestjs/common';
+import { SummariesRepository } from './summaries.repository';
+import { SummariesService } from './summaries.service';
+
+/** Per-record summary rows (`record_summaries`) for trends; no routes of its own. */
+@Module({
+  providers: [SummariesRepository, SummariesService],
+  exports: [SummariesService],
+})
+export class SummariesModule {}
