@@ -1,0 +1,133 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { KNEX, type Db } from '../../db/knex';
+
+export interface RecordContext {
+  siteName: string;
+  paperSize: 'A4' | 'Letter';
+  etco2Unit: 'mmHg' | 'kPa';
+  unitName: string | null;
+  createdByName: string | null;
+  signedByName: string | null;
+}
+
+export interface ProfileRow {
+  id: string;
+  version: number;
+  name: string;
+  thresholds: Record<string, unknown>;
+}
+
+export interface AmendmentRow {
+  id: string;
+  resuscitationId: string;
+  reason: string;
+  fields: Record<string, unknown>;
+  eventIds: string[];
+  createdBy: string;
+  createdByName: string | null;
+  createdAt: Date;
+}
+
+/** SQL for the debrief, signing and amendments; no rules here. */
+@Injectable()
+export class DebriefRepository {
+  constructor(@Inject(KNEX) private readonly db: Db) {}
+
+  /** Runs `work` in one transaction: everything it writes is kept, or nothing. */
+  transaction<T>(work: (trx: Db) => Promise<T>): Promise<T> {
+    return this.db.transaction((trx) => work(trx));
+  }
+
+  async context(record: {
+    siteId: string;
+    unitId: string | null;
+    createdBy: string | null;
+    signedBy: string | null;
+  }): Promise<RecordContext> {
+    const site = await this.db('sites')
+      .where({ id: record.siteId })
+      .first<{ name: string; paperSize: 'A4' | 'Letter'; etco2Unit: 'mmHg' | 'kPa' }>(
+        'name',
+        'paperSize',
+        'etco2Unit',
+      );
+    const unit = record.unitId
+      ? await this.db('units').where({ id: record.unitId }).first<{ name: string }>('name')
+      : undefined;
+    const names = await this.userNames([record.createdBy, record.signedBy]);
+    return {
+      siteName: site?.name ?? '',
+      paperSize: site?.paperSize ?? 'A4',
+      etco2Unit: site?.etco2Unit ?? 'mmHg',
+      unitName: unit?.name ?? null,
+      createdByName: record.createdBy ? (names.get(record.createdBy) ?? null) : null,
+      signedByName: record.signedBy ? (names.get(record.signedBy) ?? null) : null,
+    };
+  }
+
+  async userNames(ids: (string | null)[]): Promise<Map<string, string>> {
+    const wanted = ids.filter((x): x is string => Boolean(x));
+    if (wanted.length === 0) return new Map();
+    const rows = await this.db('users')
+      .whereIn('id', wanted)
+      .select<{ id: string; name: string }[]>('id', 'name');
+    return new Map(rows.map((r) => [r.id, r.name]));
+  }
+
+  /** The profile version the record references, else the site's latest. */
+  async profile(profileId: string | null, siteId: string): Promise<ProfileRow | undefined> {
+    const cols = ['id', 'version', 'name', 'thresholds'];
+    if (profileId) {
+      const row = await this.db('protocolProfiles')
+        .where({ id: profileId })
+        .first<ProfileRow>(cols);
+      if (row) return row;
+    }
+    return this.db('protocolProfiles')
+      .where({ siteId })
+      .orderBy('version', 'desc')
+      .first<ProfileRow>(cols);
+  }
+
+  async amendments(resuscitationId: string): Promise<AmendmentRow[]> {
+    return this.db('amendments as a')
+      .leftJoin('users as u', 'u.id', 'a.createdBy')
+      .where('a.resuscitationId', resuscitationId)
+      .orderBy('a.createdAt')
+      .select<AmendmentRow[]>(
+        'a.id',
+        'a.resuscitationId',
+        'a.reason',
+        'a.fields',
+        'a.eventIds',
+        'a.createdBy',
+        'u.name as createdByName',
+        'a.createdAt',
+      );
+  }
+
+  async insertAmendment(
+    row: {
+      id: string;
+      resuscitationId: string;
+      reason: string;
+      fields: Record<string, unknown>;
+      eventIds: string[];
+      createdBy: string;
+    },
+    trx: Db,
+  ): Promise<void> {
+    await trx('amendments').insert({ ...row, fields: JSON.stringify(row.fields) });
+  }
+
+  /** Marks the record signed unless it already is; returns false when it was. */
+  async markSigned(id: string, userId: string, trx: Db): Promise<boolean> {
+    const n = await trx('resuscitations').where({ id }).whereNot({ status: 'signed' }).update({
+      status: 'signed',
+      signedAt: trx.fn.now(),
+      signedBy: userId,
+      updatedAt: trx.fn.now(),
+    });
+    return n > 0;
+  }
+}

@@ -1,0 +1,172 @@
+import { randomUUID } from 'node:crypto';
+import { Injectable } from '@nestjs/common';
+import {
+  type Amendment,
+  type CreateAmendment,
+  eventSchema,
+  type Resuscitation,
+} from '@upstroke/contracts';
+import type { AuthUser } from '../../common/auth.decorators';
+import { badRequest, conflict, forbidden } from '../../common/errors';
+import type { Db } from '../../db/knex';
+import { AuditRepository } from '../audit/audit.repository';
+import { ClinicalDataRepository } from '../resuscitations/clinical-data.repository';
+import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
+import {
+  type ResuscitationRow,
+  ResuscitationsRepository,
+} from '../resuscitations/resuscitations.repository';
+import { toResuscitation } from '../resuscitations/resuscitations.service';
+import { DebriefRepository } from './debrief.repository';
+import { SummaryHook } from './summary-hook';
+
+/** Utstein core closing details the lead must fill in before signing (Nolan 2019). */
+const requiredToSign = ['outcome', 'firstRhythm', 'witnessed', 'monitored'] as const;
+
+/**
+ * Signing locks a record; afterwards it changes only through amendments with a reason.
+ * The database enforces the lock too (migration 20261202003001); these rules give the
+ * clear 4xx answers.
+ */
+@Injectable()
+export class SigningService {
+  constructor(
+    private readonly access: ResuscitationAccess,
+    private readonly records: ResuscitationsRepository,
+    private readonly data: ClinicalDataRepository,
+    private readonly repo: DebriefRepository,
+    private readonly audit: AuditRepository,
+    private readonly summaries: SummaryHook,
+  ) {}
+
+  private async leadRecord(user: AuthUser, id: string): Promise<ResuscitationRow> {
+    const record = await this.access.readable(user, id);
+    if (user.role !== 'lead') throw forbidden('Only the lead signs and amends records');
+    return record;
+  }
+
+  async sign(user: AuthUser, id: string, deviceId?: string): Promise<Resuscitation> {
+    const record = await this.leadRecord(user, id);
+    if (record.status === 'signed') throw conflict('This record is already signed');
+    const missing = requiredToSign.filter((f) => record[f] === null || record[f] === undefined);
+    if (missing.length > 0) {
+      throw badRequest(
+        `${missing.join(', ')}: complete the closing details before signing`,
+        missing.map((path) => ({ path, message: 'Required before signing' })),
+      );
+    }
+    await this.repo.transaction(async (trx) => {
+      if (!(await this.repo.markSigned(id, user.id, trx)))
+        throw conflict('This record is already signed');
+      await this.audit.insert(
+        {
+          userId: user.id,
+          action: 'sign',
+          entity: 'resuscitation',
+          entityId: id,
+          resuscitationId: id,
+          deviceId,
+        },
+        trx,
+      );
+      await this.summaries.write(id, trx);
+    });
+    return toResuscitation((await this.records.findById(id)) as ResuscitationRow);
+  }
+
+  async amend(
+    user: AuthUser,
+    id: string,
+    body: CreateAmendment,
+    deviceId?: string,
+  ): Promise<Amendment> {
+    const record = await this.leadRecord(user, id);
+    if (record.status !== 'signed')
+      throw conflict('This record is not signed yet: edit it directly instead of amending');
+    const events = this.validEvents(id, body.events ?? [], user, deviceId);
+    const fields = body.fields ?? {};
+    if (fields.unitId && !(await this.records.unitBelongsToSite(fields.unitId, record.siteId)))
+      throw badRequest('fields.unitId: this unit is not part of the site', [
+        { path: 'fields.unitId', message: 'Unknown unit for this site' },
+      ]);
+    const amendmentId = randomUUID();
+    await this.repo.transaction(async (trx) => {
+      // The amendment row comes first: the lock triggers let through only changes made in
+      // the same transaction as an amendment of this record.
+      await this.repo.insertAmendment(
+        {
+          id: amendmentId,
+          resuscitationId: id,
+          reason: body.reason,
+          fields,
+          eventIds: events.map((e) => e.id as string),
+          createdBy: user.id,
+        },
+        trx,
+      );
+      const rows = events.map((e) => ({ ...e, amendmentId }));
+      if ((await this.data.insertNew('resuscitationEvents', rows, trx)) !== rows.length)
+        throw conflict('An event with one of these ids already exists');
+      if (Object.keys(fields).length > 0) await this.records.update(id, fields, trx);
+      await this.auditAmendment(user, id, amendmentId, body, deviceId, trx);
+      await this.summaries.write(id, trx);
+    });
+    const stored = (await this.repo.amendments(id)).find((a) => a.id === amendmentId);
+    if (!stored) throw conflict('The amendment was not stored');
+    return { ...stored, createdAt: stored.createdAt.toISOString() };
+  }
+
+  /** Each added event must pass the same schema as a recorded one; all or nothing. */
+  private validEvents(
+    id: string,
+    events: NonNullable<CreateAmendment['events']>,
+    user: AuthUser,
+    deviceId?: string,
+  ) {
+    return events.map((raw, i) => {
+      const parsed = eventSchema.safeParse({ ...raw, resuscitationId: id });
+      if (!parsed.success) {
+        const issue = parsed.error.issues[0];
+        const path = `events.${i}.${issue.path.map(String).join('.')}`;
+        throw badRequest(`${path}: ${issue.message}`, [{ path, message: issue.message }]);
+      }
+      const e = parsed.data;
+      return {
+        id: e.id,
+        resuscitationId: id,
+        at: e.at,
+        kind: e.kind,
+        data: JSON.stringify(e.data),
+        recordedBy: user.id,
+        deviceId: deviceId ?? null,
+        amendment: true,
+      } as Record<string, unknown>;
+    });
+  }
+
+  private async auditAmendment(
+    user: AuthUser,
+    id: string,
+    amendmentId: string,
+    body: CreateAmendment,
+    deviceId: string | undefined,
+    trx: Db,
+  ): Promise<void> {
+    await this.audit.insert(
+      {
+        userId: user.id,
+        action: 'amend',
+        entity: 'resuscitation',
+        entityId: amendmentId,
+        resuscitationId: id,
+        deviceId,
+        details: {
+          reason: body.reason,
+          fields: Object.keys(body.fields ?? {}),
+          eventIds: (body.events ?? []).map((e) => e.id),
+        },
+      },
+      trx,
+    );
+  }
+}

@@ -1,0 +1,123 @@
+import { z } from 'zod';
+import { analysisOutputSchema, etco2PointSchema } from './analysis.js';
+import { isoDateTimeSchema, uuidSchema } from './common.js';
+import { eventKindSchema } from './events.js';
+import { thresholdsSchema } from './profile.js';
+import { patchResuscitationSchema, resuscitationSchema } from './resuscitations.js';
+
+/** One stored event as the debrief and the chart record show it (corrections visible). */
+export const debriefEventSchema = z.object({
+  id: z.string(),
+  at: isoDateTimeSchema,
+  tSec: z.number(),
+  kind: eventKindSchema,
+  data: z.record(z.string(), z.unknown()),
+  recordedBy: z.string().nullable(),
+  /** Added after signing, through the amendment named here. */
+  amendment: z.boolean(),
+  amendmentId: z.string().nullable(),
+  /** Id of the correction that replaced or removed this event, if any. */
+  supersededBy: z.string().nullable(),
+});
+export type DebriefEvent = z.infer<typeof debriefEventSchema>;
+
+export const amendmentSchema = z.object({
+  id: uuidSchema,
+  resuscitationId: uuidSchema,
+  reason: z.string(),
+  fields: z.record(z.string(), z.unknown()),
+  eventIds: z.array(z.string()),
+  createdBy: z.string(),
+  createdByName: z.string().nullable(),
+  createdAt: isoDateTimeSchema,
+});
+export type Amendment = z.infer<typeof amendmentSchema>;
+
+/** An event added by an amendment: a correction of a signed event, or a missed one. */
+export const amendmentEventSchema = z
+  .object({
+    id: uuidSchema,
+    at: isoDateTimeSchema,
+    kind: eventKindSchema,
+    data: z.record(z.string(), z.unknown()),
+  })
+  .strict();
+
+/** `POST /api/resuscitations/:id/amendments`: a correction after signing, with its reason. */
+export const createAmendmentSchema = z
+  .object({
+    reason: z.string().trim().min(1, 'A reason is required').max(2000),
+    events: z.array(amendmentEventSchema).max(200).optional(),
+    fields: patchResuscitationSchema.omit({ status: true }).optional(),
+  })
+  .strict()
+  .refine((a) => (a.events?.length ?? 0) > 0 || Object.keys(a.fields ?? {}).length > 0, {
+    path: ['events'],
+    error: 'An amendment must add an event or change a closing detail',
+  });
+export type CreateAmendment = z.infer<typeof createAmendmentSchema>;
+
+/** The header of the record as the debrief and exports show it. */
+export const debriefRecordSchema = resuscitationSchema.extend({
+  siteName: z.string(),
+  unitName: z.string().nullable(),
+  paperSize: z.enum(['A4', 'Letter']),
+  etco2Unit: z.enum(['mmHg', 'kPa']),
+  createdByName: z.string().nullable(),
+  signedByName: z.string().nullable(),
+});
+export type DebriefRecord = z.infer<typeof debriefRecordSchema>;
+
+export const debriefProfileSchema = z.object({
+  id: z.string().nullable(),
+  version: z.number().int().nullable(),
+  name: z.string(),
+  thresholds: thresholdsSchema,
+});
+
+/** A capnogram reduced for drawing: min/max per bucket keeps every breath's peak visible. */
+export const waveformTraceSchema = z.object({
+  tSec: z.array(z.number()),
+  mmHg: z.array(z.number()),
+  source: z.string(),
+});
+export type WaveformTrace = z.infer<typeof waveformTraceSchema>;
+
+/** `GET /api/resuscitations/:id/debrief`: capno's analysis plus what the screen draws. */
+export const debriefSchema = analysisOutputSchema.extend({
+  record: debriefRecordSchema,
+  profile: debriefProfileSchema,
+  etco2Series: z.array(etco2PointSchema),
+  waveformTrace: waveformTraceSchema.nullable(),
+  events: z.array(debriefEventSchema),
+  amendments: z.array(amendmentSchema),
+  /** Where the analysis ran: the server, or this tablet from its own store (offline). */
+  computedBy: z.enum(['server', 'device']),
+});
+export type Debrief = z.infer<typeof debriefSchema>;
+
+/** `POST /api/resuscitations/:id/email`. */
+export const sendDebriefEmailSchema = z
+  .object({
+    recipients: z.array(z.email()).min(1, 'Add at least one recipient').max(20),
+    message: z.string().max(2000).optional(),
+  })
+  .strict();
+export type SendDebriefEmail = z.infer<typeof sendDebriefEmailSchema>;
+
+export const mailStatusSchema = z.enum(['queued', 'sent', 'failed']);
+export const mailOutboxItemSchema = z.object({
+  id: uuidSchema,
+  to: z.array(z.string()),
+  subject: z.string(),
+  status: mailStatusSchema,
+  attempts: z.number().int(),
+  lastError: z.string().nullable(),
+  nextAttemptAt: isoDateTimeSchema,
+  sentAt: isoDateTimeSchema.nullable(),
+  createdAt: isoDateTimeSchema,
+  createdBy: z.string().nullable(),
+  resuscitationId: z.string().nullable(),
+  attachmentName: z.string().nullable(),
+});
+export type MailOutboxItem = z.infer<typeof mailOutboxItemSchema>;
