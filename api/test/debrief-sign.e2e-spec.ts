@@ -127,6 +127,8 @@ describe('debrief, signing and the lock', () => {
     ).toBe(409);
     const audit = await t.db('auditLog').where({ resuscitationId: rec.id, action: 'sign' });
     expect(audit).toHaveLength(1);
+    // The audit summary row (trends read it) is written with the signature.
+    expect(await t.db('recordSummaries').where({ resuscitationId: rec.id })).toHaveLength(1);
   });
 
   async function signedRecord() {
@@ -197,30 +199,26 @@ describe('debrief, signing and the lock', () => {
       refused,
     );
     await expect(
-      t
-        .db('etco2Samples')
-        .insert({
-          id: randomUUID(),
-          resuscitationId: rec.id,
-          at: new Date(),
-          value: 30,
-          unit: 'mmHg',
-          valueMmhg: 30,
-          source: 'manual',
-        }),
+      t.db('etco2Samples').insert({
+        id: randomUUID(),
+        resuscitationId: rec.id,
+        at: new Date(),
+        value: 30,
+        unit: 'mmHg',
+        valueMmhg: 30,
+        source: 'manual',
+      }),
     ).rejects.toThrow(refused);
     await expect(
-      t
-        .db('waveformChunks')
-        .insert({
-          id: randomUUID(),
-          resuscitationId: rec.id,
-          startAt: new Date(),
-          sampleRateHz: 50,
-          unit: 'mmHg',
-          sampleCount: 1,
-          samples: Buffer.alloc(4),
-        }),
+      t.db('waveformChunks').insert({
+        id: randomUUID(),
+        resuscitationId: rec.id,
+        startAt: new Date(),
+        sampleRateHz: 50,
+        unit: 'mmHg',
+        sampleCount: 1,
+        samples: Buffer.alloc(4),
+      }),
     ).rejects.toThrow(refused);
     const row = await t.db('resuscitations').where({ id: rec.id }).first();
     expect(row.outcome).toBe('died');

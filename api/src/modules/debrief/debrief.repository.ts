@@ -1,4 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
+import type { Knex } from 'knex';
 import { KNEX, type Db } from '../../db/knex';
 
 export interface RecordContext {
@@ -34,7 +35,7 @@ export class DebriefRepository {
   constructor(@Inject(KNEX) private readonly db: Db) {}
 
   /** Runs `work` in one transaction: everything it writes is kept, or nothing. */
-  transaction<T>(work: (trx: Db) => Promise<T>): Promise<T> {
+  transaction<T>(work: (trx: Knex.Transaction) => Promise<T>): Promise<T> {
     return this.db.transaction((trx) => work(trx));
   }
 

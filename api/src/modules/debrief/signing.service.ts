@@ -8,7 +8,7 @@ import {
 } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { badRequest, conflict, forbidden } from '../../common/errors';
-import type { Db } from '../../db/knex';
+import type { Knex } from 'knex';
 import { AuditRepository } from '../audit/audit.repository';
 import { ClinicalDataRepository } from '../resuscitations/clinical-data.repository';
 import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
@@ -17,8 +17,8 @@ import {
   ResuscitationsRepository,
 } from '../resuscitations/resuscitations.repository';
 import { toResuscitation } from '../resuscitations/resuscitations.service';
+import { SummariesService } from '../summaries/summaries.service';
 import { DebriefRepository } from './debrief.repository';
-import { SummaryHook } from './summary-hook';
 
 /** Utstein core closing details the lead must fill in before signing (Nolan 2019). */
 const requiredToSign = ['outcome', 'firstRhythm', 'witnessed', 'monitored'] as const;
@@ -36,7 +36,7 @@ export class SigningService {
     private readonly data: ClinicalDataRepository,
     private readonly repo: DebriefRepository,
     private readonly audit: AuditRepository,
-    private readonly summaries: SummaryHook,
+    private readonly summaries: SummariesService,
   ) {}
 
   private async leadRecord(user: AuthUser, id: string): Promise<ResuscitationRow> {
@@ -150,7 +150,7 @@ export class SigningService {
     amendmentId: string,
     body: CreateAmendment,
     deviceId: string | undefined,
-    trx: Db,
+    trx: Knex.Transaction,
   ): Promise<void> {
     await this.audit.insert(
       {
