@@ -43,28 +43,32 @@ export function ventilationRate(breaths: readonly Breath[], maxGapSec: number): 
 
 /** Measures and findings from events, the EtCO2 series and breaths. */
 export function analyzeCore(c: CoreInput): AnalysisOutput {
-  const tl = buildTimeline(c.events, c.endSec);
+  const end = c.endSec;
+  const tl = buildTimeline(c.events, end);
   const measures = eventMeasures(c.events, tl);
-  const segments = stepSegments(c.points, c.endSec);
+  // Values after the end of the record (e.g. monitor still running) are not part of it.
+  const points = c.points.filter((p) => p.tSec <= end);
+  const breaths = c.breaths.filter((b) => b.tSec <= end);
+  const segments = stepSegments(points, end);
   const findings = allFindings({
     t: c.thresholds,
     events: c.events,
     tl,
     pauses: measures.pauses,
-    points: c.points,
+    points,
     segments,
-    breaths: c.breaths,
+    breaths,
     waveformCoverage: c.waveformCoverage,
     live: c.live ?? false,
-  });
+  }).map((f) => ({ ...f, startSec: Math.min(f.startSec, end), endSec: Math.min(f.endSec, end) }));
   return {
     measures: {
       ...measures,
-      ventilationRatePerMin: ventilationRate(c.breaths, c.thresholds.waveformAbsentSec),
-      etco2: etco2Measures(c.points, segments, tl.compressions),
+      ventilationRatePerMin: ventilationRate(breaths, c.thresholds.waveformAbsentSec),
+      etco2: etco2Measures(points, segments, tl.compressions),
     },
     findings,
-    breaths: [...c.breaths],
+    breaths,
   };
 }
 

@@ -26,14 +26,13 @@ export type TimedEventOf<K extends EventKind> = Extract<TimedEvent, { kind: K }>
  */
 export function normalizeEvents(arrestAt: string, input: readonly InputEvent[]): TimedEvent[] {
   const events = input as readonly AnalysisEvent[];
-  const corrections = events.filter((e) => isCorrection(e));
+  const corrections = activeCorrections(events.filter((e) => isCorrection(e)));
   const supersededIds = new Set(corrections.map((c) => c.data.supersedes));
   const kept: AnalysisEvent[] = [];
   for (const e of events) {
     if (e.kind !== 'correction' && !supersededIds.has(e.id)) kept.push(e);
   }
   for (const c of corrections) {
-    if (supersededIds.has(c.id)) continue;
     const r = c.data.replacement;
     if (!r) continue;
     const parsed = analysisEventSchema.safeParse({ id: c.id, ...r });
@@ -45,7 +44,22 @@ export function normalizeEvents(arrestAt: string, input: readonly InputEvent[]):
   return timed.map((x) => x.e as TimedEvent);
 }
 
-function isCorrection(e: AnalysisEvent): e is Extract<AnalysisEvent, { kind: 'correction' }> {
+type Correction = Extract<AnalysisEvent, { kind: 'correction' }>;
+
+/** Corrections in force: latest first, a correction cancelled by one in force is not. */
+function activeCorrections(corrections: Correction[]): Correction[] {
+  const byTime = [...corrections].sort((a, b) => Date.parse(b.at) - Date.parse(a.at));
+  const cancelled = new Set<string>();
+  const active: Correction[] = [];
+  for (const c of byTime) {
+    if (cancelled.has(c.id)) continue;
+    active.push(c);
+    cancelled.add(c.data.supersedes);
+  }
+  return active.reverse();
+}
+
+function isCorrection(e: AnalysisEvent): e is Correction {
   return e.kind === 'correction';
 }
 

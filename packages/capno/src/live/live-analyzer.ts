@@ -99,8 +99,8 @@ export class LiveAnalyzer {
     return analyzeCore({
       thresholds: this.thresholds,
       events: this.events,
-      points: this.points.filter((p) => p.tSec <= endSec),
-      breaths: this.detector.breaths.filter((b) => b.tSec <= endSec),
+      points: this.points,
+      breaths: this.detector.breaths,
       waveformCoverage: this.coverage,
       endSec,
       live,
