@@ -5,11 +5,17 @@ import { JwtAuthGuard, RolesGuard } from './common/auth.guards';
 import { ErrorFilter } from './common/error.filter';
 import { APP_CONFIG, type AppConfig } from './config';
 import { DatabaseModule } from './db/database.module';
+import { AdminMailModule } from './modules/admin-mail/admin-mail.module';
 import { AuditModule } from './modules/audit/audit.module';
+import { AuditLogModule } from './modules/audit-log/audit-log.module';
 import { AuthModule } from './modules/auth/auth.module';
 import { HealthModule } from './modules/health/health.module';
+import { MailModule } from './modules/mail/mail.module';
+import { ProfilesModule } from './modules/profiles/profiles.module';
 import { LinkModule } from './modules/link/link.module';
 import { ResuscitationsModule } from './modules/resuscitations/resuscitations.module';
+import { SitesModule } from './modules/sites/sites.module';
+import { UsersModule } from './modules/users/users.module';
 import { SummariesModule } from './modules/summaries/summaries.module';
 
 @Module({})
@@ -35,6 +41,12 @@ export class AppModule {
         LinkModule,
         ResuscitationsModule,
         SummariesModule,
+        MailModule,
+        UsersModule,
+        SitesModule,
+        ProfilesModule,
+        AuditLogModule,
+        AdminMailModule,
       ],
       providers: [
         { provide: APP_CONFIG, useValue: config },

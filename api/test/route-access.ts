@@ -3,6 +3,7 @@ import type { Role } from '@upstroke/contracts';
 const clinical: Role[] = ['recorder', 'lead'];
 const readers: Role[] = ['recorder', 'lead', 'quality'];
 const everyone: Role[] = ['recorder', 'lead', 'quality', 'admin'];
+const admin: Role[] = ['admin'];
 
 /**
  * Who may call each route (OpenAPI path syntax). 'public' needs no token. The role matrix
@@ -22,4 +23,23 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'GET /api/resuscitations/{id}/debrief': readers,
   'POST /api/resuscitations/{id}/sign': ['lead'],
   'POST /api/resuscitations/{id}/amendments': ['lead'],
+  'POST /api/auth/set-password': 'public',
+  'GET /api/users': admin,
+  'POST /api/users': admin,
+  'PATCH /api/users/{id}': admin,
+  'POST /api/users/{id}/reset-password': admin,
+  'GET /api/sites': admin,
+  'POST /api/sites': admin,
+  'GET /api/sites/{id}': admin,
+  'PATCH /api/sites/{id}': admin,
+  'POST /api/sites/{id}/units': admin,
+  'PATCH /api/sites/{id}/units/{unitId}': admin,
+  'GET /api/protocol-profiles': admin,
+  'POST /api/protocol-profiles': admin,
+  'GET /api/protocol-profiles/{id}': admin,
+  'GET /api/audit': admin,
+  'GET /api/audit/export.csv': admin,
+  'GET /api/audit/vocabulary': admin,
+  'GET /api/admin/mail': admin,
+  'GET /api/admin/mail/{id}': admin,
 };

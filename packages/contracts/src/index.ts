@@ -6,3 +6,4 @@ export * from './analysis.js';
 export * from './resuscitations.js';
 export * from './monitor.js';
 export * from './quality.js';
+export * from './admin.js';

@@ -1,0 +1,30 @@
+import { Controller, Get, Param, ParseIntPipe, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { z } from 'zod';
+import { Roles } from '../../common/auth.decorators';
+import { ZodPipe } from '../../common/zod.pipe';
+import { AdminMailService } from './admin-mail.service';
+
+const pageSchema = z.object({
+  limit: z.coerce.number().int().min(1).max(200).default(50),
+  offset: z.coerce.number().int().min(0).default(0),
+});
+
+/** The mail viewer: what the local sink received, and the delivery queue's state. */
+@ApiTags('admin')
+@ApiBearerAuth()
+@Roles('admin')
+@Controller('admin/mail')
+export class AdminMailController {
+  constructor(private readonly service: AdminMailService) {}
+
+  @Get()
+  list(@Query(new ZodPipe(pageSchema)) page: z.infer<typeof pageSchema>) {
+    return this.service.overview(page.limit, page.offset);
+  }
+
+  @Get(':id')
+  get(@Param('id', ParseIntPipe) id: number) {
+    return this.service.message(id);
+  }
+}

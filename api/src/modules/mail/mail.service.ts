@@ -1,0 +1,87 @@
+import { Inject, Injectable, type OnModuleDestroy } from '@nestjs/common';
+import nodemailer, { type Transporter } from 'nodemailer';
+import { DomainError } from '../../common/errors';
+import { APP_CONFIG, type AppConfig } from '../../config';
+import type { Db } from '../../db/knex';
+import { MailOutboxRepository } from './mail-outbox.repository';
+
+export interface MailMessage {
+  to: string | string[];
+  subject: string;
+  text: string;
+  html?: string;
+  attachments?: { filename: string; content: Buffer; contentType?: string }[];
+  resuscitationId?: string | null;
+  createdBy?: string | null;
+}
+
+const unreachable = () =>
+  new DomainError(
+    503,
+    'Service Unavailable',
+    'The e-mail could not be sent (mail server unreachable); nothing was changed',
+  );
+
+/**
+ * Sends mail over SMTP (`config.smtp`); in development and tests the local sink receives it.
+ * Every message is first written to `mail_outbox` (the queue the admin mail viewer shows),
+ * then sent at once.
+ */
+@Injectable()
+export class MailService implements OnModuleDestroy {
+  private readonly transport: Transporter;
+
+  constructor(
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+    private readonly outbox: MailOutboxRepository,
+  ) {
+    this.transport = nodemailer.createTransport({
+      host: config.smtp.host,
+      port: config.smtp.port,
+      secure: false,
+      // The loopback sink offers no TLS; a hosted relay is configured with its own settings.
+      ignoreTLS: config.smtp.host === '127.0.0.1' || config.smtp.host === 'localhost',
+      connectionTimeout: 10_000,
+      greetingTimeout: 10_000,
+      socketTimeout: 20_000,
+    });
+  }
+
+  /**
+   * Inside a transaction (`trx`) the message shares the caller's fate: if it cannot be sent
+   * the call throws 503 and the caller's rollback removes the queue row with everything
+   * else. Without one, a failed attempt stays queued for retry and the call resolves 'queued'.
+   */
+  async send(message: MailMessage, trx?: Db): Promise<'sent' | 'queued'> {
+    const to = Array.isArray(message.to) ? message.to : [message.to];
+    const attachment = message.attachments?.[0];
+    const id = await this.outbox.insert(
+      {
+        to,
+        subject: message.subject,
+        body: message.text,
+        attachmentName: attachment?.filename ?? null,
+        attachmentType: attachment?.contentType ?? null,
+        attachment: attachment?.content ?? null,
+        resuscitationId: message.resuscitationId ?? null,
+        createdBy: message.createdBy ?? null,
+        nextAttemptAt: new Date(Date.now() + 120_000),
+      },
+      trx,
+    );
+    try {
+      const { resuscitationId: _r, createdBy: _c, ...mail } = message;
+      await this.transport.sendMail({ from: this.config.smtp.from, ...mail, to });
+    } catch (error) {
+      if (trx) throw unreachable();
+      await this.outbox.markAttemptFailed(id, String(error), new Date(Date.now() + 60_000));
+      return 'queued';
+    }
+    await this.outbox.markSent(id, trx);
+    return 'sent';
+  }
+
+  onModuleDestroy(): void {
+    this.transport.close();
+  }
+}

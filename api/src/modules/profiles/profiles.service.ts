@@ -1,0 +1,91 @@
+import { Injectable } from '@nestjs/common';
+import {
+  type CreateProfileVersion,
+  type List,
+  type ProtocolProfile,
+  type Thresholds,
+  thresholdDefaults,
+  thresholdKeys,
+} from '@upstroke/contracts';
+import { type AuthUser, canSeeSite } from '../../common/auth.decorators';
+import { forbidden, notFound } from '../../common/errors';
+import type { Db } from '../../db/knex';
+import { AuditRepository } from '../audit/audit.repository';
+import { type ProfileRow, ProfilesRepository } from './profiles.repository';
+
+export function toProfile(row: ProfileRow): ProtocolProfile {
+  return {
+    id: row.id,
+    siteId: row.siteId,
+    version: row.version,
+    name: row.name,
+    // Versions saved before a threshold existed read it at its default.
+    thresholds: { ...thresholdDefaults, ...row.thresholds },
+    createdAt: row.createdAt.toISOString(),
+    createdBy: row.createdBy,
+  };
+}
+
+@Injectable()
+export class ProfilesService {
+  constructor(
+    private readonly profiles: ProfilesRepository,
+    private readonly audit: AuditRepository,
+  ) {}
+
+  async list(admin: AuthUser, siteId?: string): Promise<List<ProtocolProfile>> {
+    const siteIds = siteId ? admin.siteIds.filter((s) => s === siteId) : admin.siteIds;
+    const rows = await this.profiles.listBySites(siteIds);
+    return { items: rows.map(toProfile), total: rows.length };
+  }
+
+  async get(admin: AuthUser, id: string): Promise<ProtocolProfile> {
+    const row = await this.profiles.findById(id);
+    if (!row || !canSeeSite(admin, row.siteId)) throw notFound('Protocol profile');
+    return toProfile(row);
+  }
+
+  /** Saves version N+1; records analysed before keep the version they were made under. */
+  async create(
+    admin: AuthUser,
+    body: CreateProfileVersion,
+    deviceId?: string,
+  ): Promise<ProtocolProfile> {
+    if (!canSeeSite(admin, body.siteId))
+      throw forbidden('You can change profiles only of sites you manage');
+    const id = await this.profiles.inTransaction((trx) =>
+      this.saveVersion(admin, body, deviceId, trx),
+    );
+    return toProfile((await this.profiles.findById(id)) as ProfileRow);
+  }
+
+  /** Inside the caller's transaction (a new site saves its first version this way too). */
+  async saveVersion(
+    admin: AuthUser,
+    body: { siteId: string; name: string; thresholds: Thresholds },
+    deviceId: string | undefined,
+    trx: Db,
+  ): Promise<string> {
+    const previous = await this.profiles.lockLatestVersion(body.siteId, trx);
+    const before =
+      previous > 0 ? await this.profiles.findVersion(body.siteId, previous, trx) : undefined;
+    const version = previous + 1;
+    const id = await this.profiles.insertVersion({ ...body, version, createdBy: admin.id }, trx);
+    const old = before ? toProfile(before).thresholds : undefined;
+    const changed = old
+      ? thresholdKeys.filter((k) => old[k] !== body.thresholds[k])
+      : thresholdKeys;
+    await this.audit.insert(
+      {
+        userId: admin.id,
+        action: 'profile.create',
+        entity: 'protocol-profile',
+        entityId: id,
+        deviceId,
+        details: { siteId: body.siteId, version, changed },
+      },
+      trx,
+    );
+    return id;
+  }
+}
