@@ -141,7 +141,9 @@ describe('admin: deactivation, role changes, password resets and the last admin'
       expect(res.status).toBe(503);
       expect(await t.db('users').where({ email: 'nomail@kestrel.test' })).toHaveLength(0);
       expect(await t.db('auditLog').where({ action: 'user.invite' })).toHaveLength(0);
-      expect(await t.db('mailOutbox').whereRaw("'nomail@kestrel.test' = any(\"to\")")).toHaveLength(0);
+      expect(await t.db('mailOutbox').whereRaw('\'nomail@kestrel.test\' = any("to")')).toHaveLength(
+        0,
+      );
     } finally {
       await app.close();
     }

@@ -62,5 +62,5 @@ function textOf(part: Part, depth: number): string | null {
 
 /** The plain-text body of a raw RFC 5322 message, or '' when it has none. */
 export function plainTextOf(raw: string): string {
-  return textOf(splitPart(raw), 0) ?? '';
+  return (textOf(splitPart(raw), 0) ?? '').replace(/\r\n/g, '\n');
 }

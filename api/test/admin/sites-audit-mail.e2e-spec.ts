@@ -1,0 +1,162 @@
+import { thresholdDefaults } from '@upstroke/contracts';
+import { demoSiteId, demoUnits, demoUsers } from '../test-app';
+import { type AdminTestApp, startAdminTestApp } from './admin-helpers';
+
+const adminId = demoUsers.find((u) => u.role === 'admin')!.id;
+
+describe('admin: sites and units, audit log, mail viewer', () => {
+  let t: AdminTestApp;
+  beforeAll(async () => {
+    t = await startAdminTestApp(2543);
+  });
+  afterAll(() => t.close());
+
+  it('creates a site with its units, guideline profile v1 and the creator as member', async () => {
+    const auth = await t.as('admin');
+    const res = await t
+      .http()
+      .post('/api/sites')
+      .set(...auth)
+      .set('X-Device-Id', 'admin-desk-1')
+      .send({
+        name: 'Kestrel Bay Satellite Clinic',
+        etco2Unit: 'kPa',
+        paperSize: 'Letter',
+        units: ['Day Surgery'],
+      });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({
+      etco2Unit: 'kPa',
+      paperSize: 'Letter',
+      units: [{ name: 'Day Surgery' }],
+      profile: { version: 1, name: 'Guideline defaults' },
+    });
+    const profile = await t.db('protocolProfiles').where({ id: res.body.profile.id }).first();
+    expect(profile.thresholds).toEqual(thresholdDefaults);
+    const me = await t
+      .http()
+      .get('/api/auth/me')
+      .set(...(await t.as('admin')));
+    expect(me.body.siteIds).toContain(res.body.id);
+    const dup = await t
+      .http()
+      .post('/api/sites')
+      .set(...auth)
+      .send({ name: 'kestrel bay satellite clinic', etco2Unit: 'mmHg', paperSize: 'A4' });
+    expect(dup.status).toBe(409);
+  });
+
+  it('renames a site and a unit, keeping ids; refuses a unit name used twice', async () => {
+    const auth = await t.as('admin');
+    const site = await t
+      .http()
+      .patch(`/api/sites/${demoSiteId}`)
+      .set(...auth)
+      .send({ paperSize: 'Letter' });
+    expect(site.body.paperSize).toBe('Letter');
+    const unit = await t
+      .http()
+      .patch(`/api/sites/${demoSiteId}/units/${demoUnits[2].id}`)
+      .set(...auth)
+      .send({ name: 'Ward 6B (Cardiology)' });
+    expect(unit.body.units.find((u: { id: string }) => u.id === demoUnits[2].id).name).toBe(
+      'Ward 6B (Cardiology)',
+    );
+    const twice = await t
+      .http()
+      .post(`/api/sites/${demoSiteId}/units`)
+      .set(...auth)
+      .send({ name: 'emergency' });
+    expect(twice.status).toBe(409);
+    const blank = await t
+      .http()
+      .post(`/api/sites/${demoSiteId}/units`)
+      .set(...auth)
+      .send({ name: '  ' });
+    expect(blank.body.details[0]).toEqual({ path: 'name', message: 'Enter the unit name' });
+  });
+
+  it('lists the audit trail with filters and paging, and exports it as CSV', async () => {
+    const auth = await t.as('admin');
+    const all = await t
+      .http()
+      .get('/api/audit')
+      .set(...auth);
+    expect(all.status).toBe(200);
+    expect(all.body.total).toBeGreaterThanOrEqual(4);
+    const sites = await t
+      .http()
+      .get('/api/audit?entity=site&action=site.create')
+      .set(...auth);
+    expect(sites.body.items).toHaveLength(1);
+    expect(sites.body.items[0]).toMatchObject({
+      userId: adminId,
+      userEmail: 'admin@kestrel.test',
+      deviceId: 'admin-desk-1',
+      details: { name: 'Kestrel Bay Satellite Clinic' },
+    });
+    const page = await t
+      .http()
+      .get('/api/audit?limit=1&offset=1')
+      .set(...auth);
+    expect(page.body.items).toHaveLength(1);
+    expect(page.body.items[0].id).toBe(all.body.items[1].id);
+    const future = await t
+      .http()
+      .get('/api/audit?from=2100-01-01T00:00:00Z')
+      .set(...auth);
+    expect(future.body).toEqual({ items: [], total: 0 });
+    const bad = await t
+      .http()
+      .get('/api/audit?from=yesterday')
+      .set(...auth);
+    expect(bad.status).toBe(400);
+    expect(bad.body.details[0].path).toBe('from');
+
+    const csv = await t
+      .http()
+      .get('/api/audit/export.csv?entity=site')
+      .set(...auth);
+    expect(csv.headers['content-type']).toMatch(/^text\/csv/);
+    const lines = csv.text.trim().split('\r\n');
+    expect(lines[0]).toBe(
+      'at,userEmail,userName,action,entity,entityId,resuscitationId,deviceId,details',
+    );
+    expect(lines).toHaveLength(1 + (await t.db('auditLog').where({ entity: 'site' })).length);
+  });
+
+  it('shows the sink messages with their decoded text and the outbox status', async () => {
+    const auth = await t.as('admin');
+    await t
+      .http()
+      .post('/api/users')
+      .set(...auth)
+      .send({ email: 'wren@kestrel.test', name: 'Wren Dalby', role: 'lead', siteIds: [demoSiteId] })
+      .expect(201);
+    const list = await t
+      .http()
+      .get('/api/admin/mail')
+      .set(...auth);
+    expect(list.body.outbox).toEqual({ sent: 1 });
+    expect(list.body.sink.items[0]).toMatchObject({
+      to: ['wren@kestrel.test'],
+      subject: 'Your Upstroke account',
+    });
+    const one = await t
+      .http()
+      .get(`/api/admin/mail/${list.body.sink.items[0].id}`)
+      .set(...auth);
+    expect(one.body.text).toMatch(/Hello Wren Dalby,/);
+    expect(one.body.text).toMatch(
+      /http:\/\/upstroke\.test\/set-password\?token=[A-Za-z0-9_-]{43}\n/,
+    );
+    expect(
+      (
+        await t
+          .http()
+          .get('/api/admin/mail/999999')
+          .set(...auth)
+      ).status,
+    ).toBe(404);
+  });
+});
