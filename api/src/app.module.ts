@@ -17,6 +17,8 @@ import { ResuscitationsModule } from './modules/resuscitations/resuscitations.mo
 import { SitesModule } from './modules/sites/sites.module';
 import { UsersModule } from './modules/users/users.module';
 import { SummariesModule } from './modules/summaries/summaries.module';
+import { TrendsModule } from './modules/trends/trends.module';
+import { ReviewsModule } from './modules/reviews/reviews.module';
 
 @Module({})
 export class AppModule {
@@ -41,6 +43,8 @@ export class AppModule {
         LinkModule,
         ResuscitationsModule,
         SummariesModule,
+        TrendsModule,
+        ReviewsModule,
         MailModule,
         UsersModule,
         SitesModule,

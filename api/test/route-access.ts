@@ -42,4 +42,12 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'GET /api/audit/vocabulary': admin,
   'GET /api/admin/mail': admin,
   'GET /api/admin/mail/{id}': admin,
+  'GET /api/trends': ['quality', 'admin', 'lead'],
+  'GET /api/trends/records': ['quality', 'admin', 'lead'],
+  'GET /api/trends/utstein': ['quality', 'admin', 'lead'],
+  'GET /api/trends/export.csv': ['quality', 'admin', 'lead'],
+  'GET /api/trends/utstein.csv': ['quality', 'admin', 'lead'],
+  'GET /api/reviews': ['quality', 'admin', 'lead'],
+  'GET /api/reviews/{resuscitationId}': ['quality', 'admin', 'lead'],
+  'POST /api/reviews/{resuscitationId}': ['quality'],
 };
