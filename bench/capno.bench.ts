@@ -68,6 +68,7 @@ function recordOf(minutes: number) {
 function timeAnalyze(input: AnalysisInput, runs: number) {
   const times: number[] = [];
   let breaths = 0;
+  for (let i = 0; i < 3; i++) analyze(input); // warm-up: steady-state (JIT-compiled) timings
   for (let i = 0; i < runs; i++) {
     const t0 = performance.now();
     breaths = analyze(input).breaths.length;

@@ -26,6 +26,31 @@ export interface CoreInput {
   waveformCoverage: readonly Interval[];
   endSec: number;
   live?: boolean;
+  /**
+   * Live refresh: only findings still running at or after this time are wanted, so rules
+   * read recent EtCO2 values, breaths and pauses only (a look-back long enough for every
+   * rule), and the record-wide medians are not computed (returned as null).
+   */
+  activeFrom?: number;
+}
+
+/** Look-back of a live refresh: the rise baseline and sustain, the longest hold, and a margin. */
+export function lookbackSec(t: Thresholds): number {
+  return (
+    t.riseBaselineSec + t.riseSustainSec + Math.max(t.lowEtco2MinSec, t.waveformAbsentSec) + 120
+  );
+}
+
+function tailFrom<T extends { tSec: number }>(xs: readonly T[], from: number): readonly T[] {
+  if (from === -Infinity) return xs;
+  let lo = 0;
+  let hi = xs.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (xs[mid].tSec < from) lo = mid + 1;
+    else hi = mid;
+  }
+  return xs.slice(lo);
 }
 
 /**
@@ -44,28 +69,40 @@ export function ventilationRate(breaths: readonly Breath[], maxGapSec: number): 
 /** Measures and findings from events, the EtCO2 series and breaths. */
 export function analyzeCore(c: CoreInput): AnalysisOutput {
   const end = c.endSec;
+  const from = c.activeFrom ?? -Infinity;
   const tl = buildTimeline(c.events, end);
-  const measures = eventMeasures(c.events, tl);
+  const measures = eventMeasures(c.events, tl, from);
   // Values after the end of the record (e.g. monitor still running) are not part of it.
   const points = c.points.filter((p) => p.tSec <= end);
   const breaths = c.breaths.filter((b) => b.tSec <= end);
-  const segments = stepSegments(points, end);
+  const full = from === -Infinity;
+  const segments = full ? stepSegments(points, end) : [];
+  const cut = from - lookbackSec(c.thresholds);
+  const recentBreaths = tailFrom(breaths, cut);
+  // In a live refresh, waveform absence is judged from the first breath kept onwards.
+  const watchFrom = full || !recentBreaths.length ? cut : recentBreaths[0].tSec;
   const findings = allFindings({
     t: c.thresholds,
     events: c.events,
     tl,
     pauses: measures.pauses,
-    points,
-    segments,
-    breaths,
-    waveformCoverage: c.waveformCoverage,
+    points: tailFrom(points, cut),
+    allPoints: points,
+    segments: full ? segments : stepSegments(tailFrom(points, cut), end),
+    breaths: recentBreaths,
+    waveformCoverage: c.waveformCoverage
+      .filter((w) => w.endSec > watchFrom)
+      .map((w) => ({ startSec: Math.max(w.startSec, watchFrom), endSec: w.endSec })),
     live: c.live ?? false,
+    from,
   }).map((f) => ({ ...f, startSec: Math.min(f.startSec, end), endSec: Math.min(f.endSec, end) }));
   return {
     measures: {
       ...measures,
-      ventilationRatePerMin: ventilationRate(breaths, c.thresholds.waveformAbsentSec),
-      etco2: etco2Measures(points, segments, tl.compressions),
+      ventilationRatePerMin: full ? ventilationRate(breaths, c.thresholds.waveformAbsentSec) : null,
+      etco2: full
+        ? etco2Measures(points, segments, tl.compressions)
+        : { medianMmHg: null, fractionAtOrAbove10: null, fractionAtOrAbove20: null },
     },
     findings,
     breaths,

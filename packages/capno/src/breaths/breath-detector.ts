@@ -31,7 +31,11 @@ export class BreathDetector {
   private readonly decay: number;
   private segT0 = 0;
   private n = 0;
+  private histPos = 0;
+  private smoothPos = 0;
   private smoothSum = 0;
+  private hiDelta = 0;
+  private loDelta = 0;
   private state = IN;
   private base = Infinity;
   private amp = 0;
@@ -57,6 +61,14 @@ export class BreathDetector {
     this.holdN = Math.round(this.o.amplitudeHoldSec * fs);
     this.decay = Math.pow(0.5, 1 / (this.o.amplitudeHalfLifeSec * fs));
     this.segT0 = t0Sec;
+    this.updateDeltas();
+  }
+
+  /** Threshold offsets above the baseline; they change only when the amplitude does. */
+  private updateDeltas(): void {
+    const o = this.o;
+    this.hiDelta = Math.max(o.minUpstrokeMmHg, o.highFraction * this.amp);
+    this.loDelta = Math.max(0.5 * o.minUpstrokeMmHg, o.lowFraction * this.amp);
   }
 
   /** Breaths completed so far (the array grows; callers must not mutate it). */
@@ -73,6 +85,8 @@ export class BreathDetector {
   restart(t0Sec: number): void {
     this.segT0 = t0Sec;
     this.n = 0;
+    this.histPos = 0;
+    this.smoothPos = 0;
     this.smoothSum = 0;
     this.smoothBuf.fill(0);
     this.state = IN;
@@ -89,18 +103,21 @@ export class BreathDetector {
   }
 
   private step(x: number): void {
+    // Ring positions advance by wrapping, not modulo: this loop runs for every sample.
     const i = this.n++;
-    const hist = this.hist;
-    hist[i % hist.length] = x;
+    this.hist[this.histPos] = x;
+    if (++this.histPos === this.hist.length) this.histPos = 0;
     const sb = this.smoothBuf;
-    const j = i % this.smoothN;
-    this.smoothSum += x - sb[j];
-    sb[j] = x;
-    const xs = this.smoothSum / Math.min(i + 1, this.smoothN);
-    if (++this.sinceBreathN > this.holdN) this.amp *= this.decay;
-    const o = this.o;
-    const hi = this.base + Math.max(o.minUpstrokeMmHg, o.highFraction * this.amp);
-    const lo = this.base + Math.max(0.5 * o.minUpstrokeMmHg, o.lowFraction * this.amp);
+    this.smoothSum += x - sb[this.smoothPos];
+    sb[this.smoothPos] = x;
+    if (++this.smoothPos === this.smoothN) this.smoothPos = 0;
+    const xs = this.smoothSum / (i < this.smoothN ? i + 1 : this.smoothN);
+    if (++this.sinceBreathN > this.holdN && this.amp > 0) {
+      this.amp = this.amp < 1e-3 ? 0 : this.amp * this.decay; // no denormals in long gaps
+      this.updateDeltas();
+    }
+    const hi = this.base + this.hiDelta;
+    const lo = this.base + this.loDelta;
     switch (this.state) {
       case IN:
         return this.stepIn(i, xs, hi, lo);
@@ -160,14 +177,17 @@ export class BreathDetector {
   private emit(): void {
     const fs = this.sampleRateHz;
     const hist = this.hist;
-    const oldest = Math.max(this.riseIdx, this.n - hist.length);
+    const len = hist.length;
+    const oldest = Math.max(this.riseIdx, this.n - len);
     const end = Math.max(oldest, this.lastHighIdx - Math.round(this.o.plateauGuardSec * fs));
     const start = Math.max(oldest, end - Math.max(1, Math.round(this.o.plateauWindowSec * fs)));
     let sum = 0;
-    for (let k = start; k <= end; k++) sum += hist[k % hist.length];
+    // Sample index k sits (n − k) places behind the write position of the ring.
+    for (let k = start; k <= end; k++) sum += hist[(this.histPos - (this.n - k) + 2 * len) % len];
     const etco2 = sum / (end - start + 1);
     const amplitude = etco2 - this.breathBase;
     this.amp = this.amp === 0 ? amplitude : 0.6 * this.amp + 0.4 * amplitude;
+    this.updateDeltas();
     this.sinceBreathN = 0;
     this.out.push({
       tSec: this.segT0 + this.riseIdx / fs,

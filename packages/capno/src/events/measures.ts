@@ -51,12 +51,12 @@ export function classifyPause(events: readonly TimedEvent[], s: number, e: numbe
  * Pauses: each gap between one compression interval and the next, unless circulation was
  * documented during it (ROSC or a pulse), which makes it not a pause but a period of ROSC.
  */
-export function pausesOf(events: readonly TimedEvent[], tl: Timeline): Pause[] {
+export function pausesOf(events: readonly TimedEvent[], tl: Timeline, from = -Infinity): Pause[] {
   const out: Pause[] = [];
   for (let k = 1; k < tl.compressions.length; k++) {
     const s = tl.compressions[k - 1].endSec;
     const e = tl.compressions[k].startSec;
-    if (overlaps(tl.rosc, s, e) || overlaps(tl.pulse, s, e)) continue;
+    if (e < from || overlaps(tl.rosc, s, e) || overlaps(tl.pulse, s, e)) continue;
     out.push(classifyPause(events, s, e));
   }
   return out;
@@ -64,12 +64,16 @@ export function pausesOf(events: readonly TimedEvent[], tl: Timeline): Pause[] {
 
 const diffs = (ts: readonly number[]) => ts.slice(1).map((t, i) => t - ts[i]);
 
-/** Event-derived CPR measures; EtCO2 and ventilation parts are filled in by the caller. */
+/**
+ * Event-derived CPR measures; EtCO2 and ventilation parts are filled in by the caller.
+ * `pausesFrom` (live refresh) leaves out pauses that ended before it.
+ */
 export function eventMeasures(
   events: readonly TimedEvent[],
   tl: Timeline,
+  pausesFrom = -Infinity,
 ): Omit<Measures, 'etco2' | 'ventilationRatePerMin'> {
-  const pauses = pausesOf(events, tl);
+  const pauses = pausesOf(events, tl, pausesFrom);
   const compressionSec = totalLength(intersect(tl.compressions, tl.noCirculation));
   const timeWithoutCirculationSec = totalLength(tl.noCirculation);
   const rhythmTimes = events.filter((e) => e.kind === 'rhythm').map((e) => e.tSec);

@@ -4,7 +4,6 @@ import {
   type AnalysisInput,
   type EventKind,
 } from '@upstroke/contracts';
-import { secondsFrom } from '../time.js';
 
 /** An event on the analysis clock: `tSec` is seconds from the arrest time. */
 export type TimedEvent = AnalysisEvent & { tSec: number };
@@ -39,7 +38,8 @@ export function normalizeEvents(arrestAt: string, input: readonly InputEvent[]):
     if (parsed.success && parsed.data.kind !== 'correction')
       kept.push(parsed.data as AnalysisEvent);
   }
-  const timed = kept.map((e, i) => ({ e: { ...e, tSec: secondsFrom(arrestAt, e.at) }, i }));
+  const zeroMs = Date.parse(arrestAt);
+  const timed = kept.map((e, i) => ({ e: { ...e, tSec: (Date.parse(e.at) - zeroMs) / 1000 }, i }));
   timed.sort((a, b) => a.e.tSec - b.e.tSec || a.i - b.i);
   return timed.map((x) => x.e as TimedEvent);
 }

@@ -25,6 +25,10 @@ export interface FindingContext {
   waveformCoverage: readonly Interval[];
   /** Live use: the record is still open at `tl.endSec`, so open states (a pause) are ongoing. */
   live: boolean;
+  /** Only findings that end at or after this time are needed (live refresh); else -Infinity. */
+  from: number;
+  /** All EtCO2 values, for rules that look far back (prognosis) when `points` is a recent tail. */
+  allPoints: readonly Etco2Point[];
 }
 
 /** Shown with every finding: Upstroke supports documentation and review, never treatment. */

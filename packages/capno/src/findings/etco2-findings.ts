@@ -104,10 +104,11 @@ export function prognosisFindings(c: FindingContext): Finding[] {
   if (cpr0 === undefined || airway === undefined) return [];
   const at = Math.max(cpr0 + c.t.prognosisAfterSec, airway);
   if (at > c.tl.endSec || overlaps(c.tl.rosc, 0, at)) return [];
-  const recent = c.points.filter((p) => p.tSec <= at && p.tSec >= at - 60).map((p) => p.mmHg);
+  const all = c.allPoints;
+  const recent = all.filter((p) => p.tSec <= at && p.tSec >= at - 60).map((p) => p.mmHg);
   const m = median(recent);
   if (m === null || m >= c.t.prognosisEtco2MmHg) return [];
-  const rise = c.points.find((p) => p.tSec > at && p.mmHg >= c.t.prognosisEtco2MmHg);
+  const rise = all.find((p) => p.tSec > at && p.mmHg >= c.t.prognosisEtco2MmHg);
   const msg = `After ${fmt((at - cpr0) / 60)} min of CPR with an advanced airway, EtCO2 is still below ${fmt(c.t.prognosisEtco2MmHg)} mmHg (median ${fmt(m)} mmHg over the last minute). Published studies associate this with a low chance of ROSC; it is one input among several.`;
   const caution = `${CAUTION} Never use EtCO2 alone to decide to stop resuscitation.`;
   return [

@@ -27,6 +27,7 @@ function ongoingPause(c: FindingContext) {
 export function pauseFindings(c: FindingContext): Finding[] {
   const out: Finding[] = [];
   for (const p of [...c.pauses, ...ongoingPause(c)]) {
+    if (p.endSec < c.from) continue;
     if (p.durationSec > c.t.pauseMaxSec) {
       const sev = p.durationSec >= 2 * c.t.pauseMaxSec ? 'critical' : 'warning';
       const msg = `Compressions paused for ${fmt(p.durationSec)} s (${p.context}), longer than the ${fmt(c.t.pauseMaxSec)} s target. Long pauses suggest room to shorten interruptions; consider planning tasks before stopping.`;
@@ -73,7 +74,7 @@ export function rhythmCheckFindings(c: FindingContext): Finding[] {
     const open = k + 1 >= refs.length;
     if (open && !compressionsRunningAtEnd(c.tl)) continue;
     const b = open ? c.tl.endSec : refs[k + 1];
-    if (b - a <= limit || overlaps(circulation, a, b)) continue;
+    if (b < c.from || b - a <= limit || overlaps(circulation, a, b)) continue;
     const msg = open
       ? `No rhythm check recorded for ${fmt(b - a)} s (due every ${fmt(c.t.rhythmCheckIntervalSec)} s); consider whether a rhythm check is due.`
       : `The rhythm check came ${fmt(b - a)} s after the previous one, later than the ${fmt(c.t.rhythmCheckIntervalSec)} s cycle plus ${fmt(c.t.rhythmCheckToleranceSec)} s tolerance.`;
@@ -95,7 +96,7 @@ export function epinephrineFindings(c: FindingContext): Finding[] {
   const range = `${fmt(min / 60)}–${fmt(max / 60)} min`;
   for (let k = 1; k < ts.length; k++) {
     const [a, b] = [ts[k - 1], ts[k]];
-    if ((b - a >= min && b - a <= max) || overlaps(circulation, a, b)) continue;
+    if (b < c.from || (b - a >= min && b - a <= max) || overlaps(circulation, a, b)) continue;
     const side = b - a < min ? 'shorter' : 'longer';
     const msg = `Epinephrine doses ${fmt(b - a)} s apart, ${side} than the ${range} interval of the protocol; consider reviewing the timing of doses.`;
     out.push(finding('epinephrine-interval', a, b, 'warning', msg));

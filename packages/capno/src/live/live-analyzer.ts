@@ -85,7 +85,8 @@ export class LiveAnalyzer {
 
   /** Findings still in progress at `nowSec` (their end is now). */
   activeFindings(nowSec: number): Finding[] {
-    return this.compute(nowSec, true).findings.filter((f) => f.endSec >= nowSec - 1e-6);
+    const active = this.compute(nowSec, true, nowSec - 1e-6).findings;
+    return active.filter((f) => f.endSec >= nowSec - 1e-6);
   }
 
   /** The full analysis of what has arrived so far, up to `nowSec` (default: the last data). */
@@ -93,7 +94,7 @@ export class LiveAnalyzer {
     return this.compute(nowSec, nowSec !== undefined);
   }
 
-  private compute(nowSec: number | undefined, live: boolean): AnalysisOutput {
+  private compute(nowSec: number | undefined, live: boolean, activeFrom?: number): AnalysisOutput {
     this.events ??= normalizeEvents(this.arrestAt, this.rawEvents);
     const endSec = nowSec ?? recordEnd(this.events, this.points, this.coverage);
     return analyzeCore({
@@ -104,6 +105,7 @@ export class LiveAnalyzer {
       waveformCoverage: this.coverage,
       endSec,
       live,
+      activeFrom,
     });
   }
 
