@@ -12,6 +12,7 @@ import { AuthModule } from './modules/auth/auth.module';
 import { HealthModule } from './modules/health/health.module';
 import { MailModule } from './modules/mail/mail.module';
 import { ProfilesModule } from './modules/profiles/profiles.module';
+import { ImportsModule } from './modules/imports/imports.module';
 import { LinkModule } from './modules/link/link.module';
 import { ResuscitationsModule } from './modules/resuscitations/resuscitations.module';
 import { SitesModule } from './modules/sites/sites.module';
@@ -41,6 +42,7 @@ export class AppModule {
         AuthModule,
         HealthModule,
         LinkModule,
+        ImportsModule,
         ResuscitationsModule,
         SummariesModule,
         TrendsModule,

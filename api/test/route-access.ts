@@ -50,4 +50,7 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'GET /api/reviews': ['quality', 'admin', 'lead'],
   'GET /api/reviews/{resuscitationId}': ['quality', 'admin', 'lead'],
   'POST /api/reviews/{resuscitationId}': ['quality'],
+  'GET /api/resuscitations/{id}/imports': readers,
+  'POST /api/resuscitations/{id}/imports': clinical,
+  'PATCH /api/resuscitations/{id}/imports/{importId}': ['lead'],
 };

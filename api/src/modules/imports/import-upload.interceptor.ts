@@ -1,0 +1,44 @@
+import { rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import {
+  type CallHandler,
+  type ExecutionContext,
+  Injectable,
+  type NestInterceptor,
+  PayloadTooLargeException,
+} from '@nestjs/common';
+import { FileInterceptor } from '@nestjs/platform-express';
+import { IMPORT_MAX_BYTES } from '@upstroke/contracts';
+import { EMPTY, finalize, type Observable } from 'rxjs';
+import { DomainError } from '../../common/errors';
+
+const MultipartFile = FileInterceptor('file', {
+  // On disk, not in memory: a 50 MB file must not cost 50 MB of heap per upload.
+  dest: tmpdir(),
+  limits: { fileSize: IMPORT_MAX_BYTES, files: 1, fields: 10, parts: 12 },
+});
+
+/**
+ * Receives the `file` part to a temporary file, names the size limit when it is exceeded,
+ * and removes the temporary file once the request is answered.
+ */
+@Injectable()
+export class ImportUploadInterceptor implements NestInterceptor {
+  private readonly multipart = new MultipartFile();
+
+  async intercept(ctx: ExecutionContext, next: CallHandler): Promise<Observable<unknown>> {
+    try {
+      await this.multipart.intercept(ctx, { handle: () => EMPTY });
+    } catch (e) {
+      if (e instanceof PayloadTooLargeException)
+        throw new DomainError(413, 'Payload Too Large', 'file: larger than the 50 MB limit');
+      throw e;
+    }
+    const file = ctx.switchToHttp().getRequest<{ file?: Express.Multer.File }>().file;
+    return next.handle().pipe(
+      finalize(() => {
+        if (file?.path) void rm(file.path, { force: true });
+      }),
+    );
+  }
+}

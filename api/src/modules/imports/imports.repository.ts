@@ -1,0 +1,75 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { Co2Unit } from '@upstroke/contracts';
+import { KNEX, type Db } from '../../db/knex';
+
+export interface ImportRow {
+  id: string;
+  resuscitationId: string;
+  fileName: string;
+  sha256: string;
+  rows: number;
+  startedAt: Date;
+  endedAt: Date;
+  unit: Co2Unit;
+  sampleRateHz: number;
+  offsetSec: number;
+  offsetMethod: 'auto' | 'manual';
+  offsetChosenBy: string | null;
+  residualSec: number | null;
+  markers: number;
+  matchedMarkers: number;
+  breaths: number;
+  createdAt: Date;
+  createdBy: string | null;
+}
+
+/** Imported monitor files and their samples; no rules here. */
+@Injectable()
+export class ImportsRepository {
+  constructor(@Inject(KNEX) private readonly db: Db) {}
+
+  async listByResuscitation(resuscitationId: string): Promise<ImportRow[]> {
+    return this.db<ImportRow>('imports').where({ resuscitationId }).orderBy('createdAt');
+  }
+
+  async findById(resuscitationId: string, id: string, trx?: Db): Promise<ImportRow | undefined> {
+    return (trx ?? this.db)<ImportRow>('imports').where({ resuscitationId, id }).first();
+  }
+
+  async findBySha(resuscitationId: string, sha256: string): Promise<ImportRow | undefined> {
+    return this.db<ImportRow>('imports').where({ resuscitationId, sha256 }).first();
+  }
+
+  async insert(row: Omit<ImportRow, 'createdAt'>, trx: Db): Promise<ImportRow> {
+    const [stored] = await trx<ImportRow>('imports').insert(row).returning('*');
+    return stored as ImportRow;
+  }
+
+  async updateOffset(
+    id: string,
+    patch: Pick<ImportRow, 'offsetSec' | 'offsetMethod' | 'offsetChosenBy' | 'residualSec'>,
+    trx: Db,
+  ): Promise<void> {
+    await trx('imports').where({ id }).update(patch);
+  }
+
+  async insertChunks(rows: object[], trx: Db): Promise<void> {
+    if (rows.length > 0) await trx('waveformChunks').insert(rows);
+  }
+
+  async insertEtco2(rows: object[], trx: Db): Promise<void> {
+    for (let i = 0; i < rows.length; i += 2000)
+      await trx('etco2Samples').insert(rows.slice(i, i + 2000));
+  }
+
+  /** Moves an import's stored samples by `deltaSec` (later when positive). */
+  async shiftSamples(importId: string, deltaSec: number, trx: Db): Promise<void> {
+    const by = trx.raw(`? * interval '1 second'`, [deltaSec]);
+    await trx('waveformChunks')
+      .where({ importId })
+      .update({ startAt: trx.raw('start_at + ?', [by]) });
+    await trx('etco2Samples')
+      .where({ importId })
+      .update({ at: trx.raw('at + ?', [by]) });
+  }
+}
