@@ -9,17 +9,20 @@ import { AdminMailModule } from './modules/admin-mail/admin-mail.module';
 import { AuditModule } from './modules/audit/audit.module';
 import { AuditLogModule } from './modules/audit-log/audit-log.module';
 import { AuthModule } from './modules/auth/auth.module';
+import { DebriefModule } from './modules/debrief/debrief.module';
+import { ExportsModule } from './modules/exports/exports.module';
 import { HealthModule } from './modules/health/health.module';
-import { MailModule } from './modules/mail/mail.module';
-import { ProfilesModule } from './modules/profiles/profiles.module';
 import { ImportsModule } from './modules/imports/imports.module';
 import { LinkModule } from './modules/link/link.module';
+import { MailModule } from './modules/mail/mail.module';
+import { ProfilesModule } from './modules/profiles/profiles.module';
 import { ResuscitationsModule } from './modules/resuscitations/resuscitations.module';
-import { SitesModule } from './modules/sites/sites.module';
-import { UsersModule } from './modules/users/users.module';
 import { SummariesModule } from './modules/summaries/summaries.module';
 import { TrendsModule } from './modules/trends/trends.module';
 import { ReviewsModule } from './modules/reviews/reviews.module';
+import { SiteContextModule } from './modules/site-context/site-context.module';
+import { SitesModule } from './modules/sites/sites.module';
+import { UsersModule } from './modules/users/users.module';
 
 @Module({})
 export class AppModule {
@@ -44,9 +47,12 @@ export class AppModule {
         LinkModule,
         ImportsModule,
         ResuscitationsModule,
+        DebriefModule,
+        ExportsModule,
         SummariesModule,
         TrendsModule,
         ReviewsModule,
+        SiteContextModule,
         MailModule,
         UsersModule,
         SitesModule,

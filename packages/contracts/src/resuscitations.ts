@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { co2UnitSchema, isoDateTimeSchema, uuidSchema } from './common.js';
 import { etco2SourceSchema } from './analysis.js';
 import { endReasonSchema, rhythmSchema } from './events.js';
+import { rosterSchema } from './site-context.js';
 
 export const ageGroupSchema = z.enum(['adult', 'child', 'infant']);
 export type AgeGroup = z.infer<typeof ageGroupSchema>;
@@ -46,6 +47,7 @@ export const patchResuscitationSchema = z
     endReason: endReasonSchema.nullable(),
     notesWentWell: z.string().max(5000).nullable(),
     notesToChange: z.string().max(5000).nullable(),
+    roster: rosterSchema,
   })
   .partial()
   .strict();
@@ -72,6 +74,7 @@ export const resuscitationSchema = z.object({
   createdAt: isoDateTimeSchema,
   signedAt: isoDateTimeSchema.nullable(),
   signedBy: z.string().nullable(),
+  roster: rosterSchema.optional(),
 });
 export type Resuscitation = z.infer<typeof resuscitationSchema>;
 

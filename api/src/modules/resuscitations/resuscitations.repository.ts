@@ -47,6 +47,7 @@ const columns = [
   'profileId',
   'deviceId',
   'updatedAt',
+  'roster',
 ];
 
 /** SQL for resuscitation records; no rules here. */

@@ -102,7 +102,9 @@ export class ResuscitationsService {
         { path: 'unitId', message: 'Unknown unit for this site' },
       ]);
     }
-    await this.records.update(id, patch);
+    // jsonb arrays must be sent as JSON text: the driver would write a Postgres array otherwise.
+    const { roster, ...rest } = patch;
+    await this.records.update(id, roster ? { ...rest, roster: JSON.stringify(roster) } : rest);
     await this.audit.insert({
       userId: user.id,
       action: 'update',

@@ -1,0 +1,17 @@
+/** The offline store and its sync: every write lands in IndexedDB first, then the outbox. */
+export {
+  offlineDb,
+  type LocalEtco2,
+  type LocalEvent,
+  type LocalResuscitation,
+  type LocalWaveformChunk,
+} from './db';
+export {
+  queueWaveformChunk,
+  recordEtco2,
+  recordEvent,
+  startResuscitation,
+  updateResuscitation,
+} from './record';
+export { startSync, syncEngine } from './engine-instance';
+export { useSyncState, type SyncState } from './use-sync-state';

@@ -1,0 +1,178 @@
+import { authStore } from '../auth-store';
+import { backoffDelay, type BackoffOptions } from './backoff';
+import { measureClock } from './clock';
+import { type OfflineDb } from './db';
+import { countWaiting, drainOutbox, type DrainResult } from './outbox';
+import type { SyncTransport } from './transport';
+import { writeSignal } from './write-signal';
+
+export interface EngineState {
+  online: boolean;
+  syncing: boolean;
+  failures: number;
+  lastError: string | null;
+  lastSyncAt: number | null;
+  clockOffsetMs: number | null;
+}
+
+export interface EngineOptions {
+  intervalMs?: number;
+  debounceMs?: number;
+  backoff?: BackoffOptions;
+  isOnline?: () => boolean;
+  hasSession?: () => boolean;
+  now?: () => number;
+}
+
+/**
+ * Drains the outbox whenever it can: soon after a local write, on reconnect, when the tablet
+ * wakes (visibility), and on an interval; after a failure it waits an exponential back-off
+ * with jitter. One drain runs at a time; writes during a drain trigger another.
+ */
+export class SyncEngine {
+  private state: EngineState;
+  private readonly listeners = new Set<() => void>();
+  private running: Promise<DrainResult | null> | null = null;
+  private again = false;
+  private nextAttemptAt = 0;
+  private timers: ReturnType<typeof setTimeout>[] = [];
+  private stopFns: (() => void)[] = [];
+  private readonly o: Required<EngineOptions>;
+
+  constructor(
+    private readonly db: OfflineDb,
+    private readonly transport: SyncTransport,
+    options: EngineOptions = {},
+  ) {
+    this.o = {
+      intervalMs: 5000,
+      debounceMs: 150,
+      backoff: {},
+      isOnline: () => typeof navigator === 'undefined' || navigator.onLine,
+      hasSession: () => authStore.get() !== null,
+      now: Date.now,
+      ...options,
+    };
+    const online = this.o.isOnline();
+    this.state = {
+      online,
+      syncing: false,
+      failures: 0,
+      lastError: null,
+      lastSyncAt: null,
+      clockOffsetMs: null,
+    };
+  }
+
+  getState = (): EngineState => this.state;
+  subscribe = (l: () => void) => {
+    this.listeners.add(l);
+    return () => {
+      this.listeners.delete(l);
+    };
+  };
+
+  private set(patch: Partial<EngineState>) {
+    this.state = { ...this.state, ...patch };
+    this.listeners.forEach((l) => l());
+  }
+
+  /** Runs a drain now unless one is running (then another follows) or a back-off holds. */
+  syncNow(force = false): Promise<DrainResult | null> {
+    if (this.running) {
+      this.again = true;
+      return this.running;
+    }
+    if (!this.o.isOnline() || !this.o.hasSession()) return Promise.resolve(null);
+    if (!force && this.o.now() < this.nextAttemptAt) return Promise.resolve(null);
+    this.running = this.run().finally(() => {
+      this.running = null;
+      if (this.again) {
+        this.again = false;
+        void this.syncNow();
+      }
+    });
+    return this.running;
+  }
+
+  private async run(): Promise<DrainResult | null> {
+    this.set({ syncing: true });
+    try {
+      // Each sync measures the clock afresh and refreshes the cached sites for offline starts.
+      const { context, offsetMs } = await measureClock(() => this.transport.context(), this.o.now);
+      await this.db.meta.bulkPut([
+        { key: 'context', value: context },
+        { key: 'clock', value: { offsetMs, at: context.serverTime } },
+      ]);
+      const result = (await countWaiting(this.db))
+        ? await drainOutbox(this.db, this.transport, offsetMs)
+        : { sent: 0, refused: 0 };
+      this.nextAttemptAt = 0;
+      this.set({
+        syncing: false,
+        failures: 0,
+        lastError: null,
+        lastSyncAt: this.o.now(),
+        clockOffsetMs: offsetMs,
+      });
+      return result;
+    } catch (error) {
+      const failures = this.state.failures + 1;
+      const delay = backoffDelay(failures, this.o.backoff);
+      this.nextAttemptAt = this.o.now() + delay;
+      this.later(delay, () => void this.syncNow());
+      this.set({
+        syncing: false,
+        failures,
+        lastError: error instanceof Error ? error.message : String(error),
+      });
+      return null;
+    }
+  }
+
+  private later(ms: number, fn: () => void) {
+    this.timers.push(setTimeout(fn, ms));
+  }
+
+  /** Wires the triggers (browser events, interval, local writes). Returns a stop function. */
+  start(): () => void {
+    const onOnline = () => {
+      this.set({ online: true, failures: 0 });
+      this.nextAttemptAt = 0;
+      void this.syncNow(true);
+    };
+    const onOffline = () => this.set({ online: false });
+    const onVisible = () => {
+      if (document.visibilityState === 'visible') void this.syncNow();
+    };
+    let pending: ReturnType<typeof setTimeout> | null = null;
+    const onWrite = () => {
+      pending ??= setTimeout(() => {
+        pending = null;
+        void this.syncNow();
+      }, this.o.debounceMs);
+    };
+    window.addEventListener('online', onOnline);
+    window.addEventListener('offline', onOffline);
+    document.addEventListener('visibilitychange', onVisible);
+    const interval = setInterval(() => void this.syncNow(), this.o.intervalMs);
+    const unsubscribe = writeSignal.subscribe(onWrite);
+    this.stopFns.push(() => {
+      window.removeEventListener('online', onOnline);
+      window.removeEventListener('offline', onOffline);
+      document.removeEventListener('visibilitychange', onVisible);
+      clearInterval(interval);
+      unsubscribe();
+      if (pending) clearTimeout(pending);
+    });
+    void this.syncNow(true);
+    return () => this.stop();
+  }
+
+  stop() {
+    this.stopFns.forEach((f) => f());
+    this.stopFns = [];
+    this.timers.forEach(clearTimeout);
+    this.timers = [];
+  }
+}

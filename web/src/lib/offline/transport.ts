@@ -1,0 +1,60 @@
+import {
+  type BatchResult,
+  batchResultSchema,
+  type RecordingContext,
+  recordingContextSchema,
+} from '@upstroke/contracts';
+import { apiFetch, ApiRequestError } from '../api-client';
+
+export type BatchKind = 'events' | 'etco2' | 'waveform';
+
+/** What the outbox needs from the server; tests give a fake one. */
+export interface SyncTransport {
+  context(): Promise<RecordingContext>;
+  create(body: Record<string, unknown>): Promise<void>;
+  patch(id: string, body: Record<string, unknown>): Promise<void>;
+  batch(
+    id: string,
+    kind: BatchKind,
+    items: object[],
+    clockOffsetMs: number | undefined,
+  ): Promise<BatchResult>;
+}
+
+const bodyKey: Record<BatchKind, string> = {
+  events: 'events',
+  etco2: 'samples',
+  waveform: 'chunks',
+};
+
+/** A refusal that retrying will not change (400, 403, 404, 409, 422). */
+export function isPermanent(error: unknown): boolean {
+  return (
+    error instanceof ApiRequestError &&
+    error.status >= 400 &&
+    error.status < 500 &&
+    error.status !== 401 &&
+    error.status !== 408 &&
+    error.status !== 429
+  );
+}
+
+export const apiTransport: SyncTransport = {
+  context: () => apiFetch('/context', { schema: recordingContextSchema }),
+  async create(body) {
+    await apiFetch('/resuscitations', { method: 'POST', body });
+  },
+  async patch(id, body) {
+    await apiFetch(`/resuscitations/${id}`, { method: 'PATCH', body });
+  },
+  batch(id, kind, items, clockOffsetMs) {
+    const headers: Record<string, string> =
+      clockOffsetMs === undefined ? {} : { 'X-Clock-Offset-Ms': String(clockOffsetMs) };
+    return apiFetch(`/resuscitations/${id}/${kind}/batch`, {
+      method: 'POST',
+      body: { [bodyKey[kind]]: items },
+      headers,
+      schema: batchResultSchema,
+    });
+  },
+};

@@ -1,0 +1,36 @@
+import { useLiveQuery } from 'dexie-react-hooks';
+import { useSyncExternalStore } from 'react';
+import { offlineDb } from './db';
+import { countWaiting } from './outbox';
+import { syncEngine } from './engine-instance';
+
+export interface SyncState {
+  status: 'saved' | 'waiting' | 'offline';
+  waiting: number;
+  refused: number;
+  syncing: boolean;
+  lastError: string | null;
+  clockOffsetMs: number | null;
+}
+
+/** "All saved", "N waiting" or "Offline", live from IndexedDB and the sync engine. */
+export function useSyncState(): SyncState {
+  const engine = useSyncExternalStore(syncEngine.subscribe, syncEngine.getState);
+  const waiting = useLiveQuery(() => countWaiting(offlineDb), [], 0);
+  const refused = useLiveQuery(
+    async () =>
+      (await offlineDb.events.where('synced').equals(2).count()) +
+      (await offlineDb.etco2.where('synced').equals(2).count()),
+    [],
+    0,
+  );
+  const status = !engine.online ? 'offline' : waiting > 0 ? 'waiting' : 'saved';
+  return {
+    status,
+    waiting,
+    refused,
+    syncing: engine.syncing,
+    lastError: engine.lastError,
+    clockOffsetMs: engine.clockOffsetMs,
+  };
+}
