@@ -1,5 +1,9 @@
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { SetPasswordPage } from '../features/account/components/set-password-page';
+import { AdminPage } from '../features/admin/components/admin-page';
 import { SignInPage } from '../features/auth/components/sign-in-page';
+import { ReviewQueuePage } from '../features/reviews/components/review-queue-page';
+import { TrendsPage } from '../features/trends/components/trends-page';
 import { Layout } from './layout';
 import { RequireAuth } from './require-auth';
 import { NotFoundPage } from './routes/not-found';
@@ -35,7 +39,7 @@ export const appRoutes: RouteObject[] = [
     path: 'trends',
     element: (
       <RequireAuth roles={['quality', 'admin', 'lead']}>
-        <Placeholder title="Trends" text="Quality measures across codes and units." />
+        <TrendsPage />
       </RequireAuth>
     ),
   },
@@ -43,7 +47,7 @@ export const appRoutes: RouteObject[] = [
     path: 'review',
     element: (
       <RequireAuth roles={['quality']}>
-        <Placeholder title="Review queue" text="Signed records awaiting review." />
+        <ReviewQueuePage />
       </RequireAuth>
     ),
   },
@@ -51,7 +55,7 @@ export const appRoutes: RouteObject[] = [
     path: 'admin/*',
     element: (
       <RequireAuth roles={['admin']}>
-        <Placeholder title="Admin" text="Users, sites, protocol profiles, audit log." />
+        <AdminPage />
       </RequireAuth>
     ),
   },
@@ -61,6 +65,7 @@ export const appRoutes: RouteObject[] = [
 export function createRouter() {
   return createBrowserRouter([
     { path: '/sign-in', element: <SignInPage /> },
+    { path: '/set-password', element: <SetPasswordPage /> },
     { path: '/', element: <Layout />, children: appRoutes },
   ]);
 }

@@ -1,0 +1,72 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render, screen, waitFor } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { thresholdDefaults } from '@upstroke/contracts';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { ProfileForm } from './profile-form';
+
+const siteId = '6f1c1f0e-8a51-4d5e-9d8e-2f1c8c3c0a11';
+
+function renderForm() {
+  const client = new QueryClient({ defaultOptions: { mutations: { retry: false } } });
+  return render(
+    <QueryClientProvider client={client}>
+      <ProfileForm siteId={siteId} basis={null} onSaved={() => undefined} />
+    </QueryClientProvider>,
+  );
+}
+
+describe('ProfileForm', () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('shows each guideline default with its source beside the field', () => {
+    renderForm();
+    const low = screen.getByRole('spinbutton', { name: 'Low EtCO2' });
+    expect(low).toHaveValue(thresholdDefaults.lowEtco2MmHg);
+    // AHA 2020 adult ALS; Sandroni 2018 (REFERENCE.md, summary): default 10 mmHg.
+    expect(screen.getByText(/Default 10 mmHg — AHA 2020 adult ALS/)).toBeInTheDocument();
+  });
+
+  it('refuses an impossible threshold with a message naming the field, range and unit', async () => {
+    const fetchMock = vi.fn();
+    vi.stubGlobal('fetch', fetchMock);
+    renderForm();
+    const pause = screen.getByRole('spinbutton', { name: 'Longest acceptable pause' });
+    await userEvent.clear(pause);
+    await userEvent.type(pause, '900');
+    await userEvent.click(screen.getByRole('button', { name: 'Save as new version' }));
+    expect(
+      await screen.findByText('Longest acceptable pause must be between 2 s and 120 s'),
+    ).toBeInTheDocument();
+    expect(fetchMock).not.toHaveBeenCalled();
+  });
+
+  it('sends the whole profile as a new version', async () => {
+    const fetchMock = vi.fn(async (_url: string, init: RequestInit) => {
+      const body = JSON.parse(String(init.body)) as { thresholds: object; name: string };
+      const saved = {
+        id: siteId,
+        siteId,
+        version: 2,
+        createdAt: '2026-03-04T10:00:00Z',
+        createdBy: null,
+        ...body,
+      };
+      return new Response(JSON.stringify(saved), { status: 201 });
+    });
+    vi.stubGlobal('fetch', fetchMock);
+    renderForm();
+    const low = screen.getByRole('spinbutton', { name: 'Low EtCO2' });
+    await userEvent.clear(low);
+    await userEvent.type(low, '12');
+    await userEvent.click(screen.getByRole('button', { name: 'Save as new version' }));
+    await waitFor(() => expect(fetchMock).toHaveBeenCalledTimes(1));
+    const [url, init] = fetchMock.mock.calls[0];
+    expect(url).toBe('/api/protocol-profiles');
+    expect(JSON.parse(String(init.body))).toMatchObject({
+      siteId,
+      thresholds: { ...thresholdDefaults, lowEtco2MmHg: 12 },
+    });
+    expect(await screen.findByText('Saved as version 2.')).toBeInTheDocument();
+  });
+});

@@ -1,0 +1,110 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Alert, Box, Button, InputAdornment, Stack, TextField, Typography } from '@mui/material';
+import {
+  type CreateProfileVersion,
+  createProfileVersionSchema,
+  type ProtocolProfile,
+  type ThresholdGroup,
+  thresholdDefaults,
+  thresholdFields,
+  thresholdGroupLabels,
+  thresholdKeys,
+  thresholdRange,
+  thresholdSources,
+} from '@upstroke/contracts';
+import { useForm } from 'react-hook-form';
+import { ClinicalCaution } from '../../../components/ui/clinical-caution';
+import { useCreateProfile } from '../api/create-profile';
+import { apiErrorText } from './api-error';
+
+const groups = Object.keys(thresholdGroupLabels) as ThresholdGroup[];
+
+/** Every threshold of a site's profile, with its guideline default and source beside it. */
+export function ProfileForm({
+  siteId,
+  basis,
+  onSaved,
+}: {
+  siteId: string;
+  basis: ProtocolProfile | null;
+  onSaved: (p: ProtocolProfile) => void;
+}) {
+  const create = useCreateProfile();
+  const { register, handleSubmit, reset, formState } = useForm<CreateProfileVersion>({
+    resolver: zodResolver(createProfileVersionSchema),
+    values: {
+      siteId,
+      name: basis?.name ?? 'Guideline defaults',
+      thresholds: basis?.thresholds ?? thresholdDefaults,
+    },
+  });
+  const submit = handleSubmit((body) => create.mutate(body, { onSuccess: onSaved }));
+  const errors = formState.errors.thresholds;
+  return (
+    <Box component="form" noValidate onSubmit={(e) => void submit(e)} aria-label="Protocol profile">
+      <Stack spacing={2}>
+        <ClinicalCaution text="Thresholds decide which findings the debrief shows; they never diagnose. Saving creates a new version: records keep the version in force when they began." />
+        {create.isError && <Alert severity="error">{apiErrorText(create.error)}</Alert>}
+        {create.isSuccess && (
+          <Alert severity="success">Saved as version {create.data.version}.</Alert>
+        )}
+        <TextField
+          label="Profile name"
+          {...register('name')}
+          error={Boolean(formState.errors.name)}
+          helperText={formState.errors.name?.message}
+          sx={{ maxWidth: 420 }}
+        />
+        {groups.map((group) => (
+          <Box key={group} component="fieldset" sx={{ border: 0, p: 0, m: 0 }}>
+            <Typography component="legend" variant="h3" sx={{ mb: 1.5 }}>
+              {thresholdGroupLabels[group]}
+            </Typography>
+            <Box
+              sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', md: '1fr 1fr' } }}
+            >
+              {thresholdKeys
+                .filter((k) => thresholdFields[k].group === group)
+                .map((key) => {
+                  const { label, unit, step } = thresholdFields[key];
+                  const { min, max } = thresholdRange(key);
+                  const error = errors?.[key]?.message;
+                  return (
+                    <TextField
+                      key={key}
+                      label={label}
+                      type="number"
+                      {...register(`thresholds.${key}`, { valueAsNumber: true })}
+                      error={Boolean(error)}
+                      helperText={
+                        error ??
+                        `Default ${thresholdDefaults[key]} ${unit} — ${thresholdSources[key]}`
+                      }
+                      slotProps={{
+                        htmlInput: { step, min, max },
+                        input: unit
+                          ? { endAdornment: <InputAdornment position="end">{unit}</InputAdornment> }
+                          : undefined,
+                      }}
+                    />
+                  );
+                })}
+            </Box>
+          </Box>
+        ))}
+        <Stack direction="row" spacing={1} sx={{ justifyContent: 'flex-end' }}>
+          <Button
+            onClick={() =>
+              reset({ siteId, name: 'Guideline defaults', thresholds: thresholdDefaults })
+            }
+          >
+            Fill in guideline defaults
+          </Button>
+          <Button type="submit" variant="contained" disabled={create.isPending}>
+            Save as new version
+          </Button>
+        </Stack>
+      </Stack>
+    </Box>
+  );
+}
