@@ -2,6 +2,8 @@ import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { SetPasswordPage } from '../features/account/components/set-password-page';
 import { AdminPage } from '../features/admin/components/admin-page';
 import { SignInPage } from '../features/auth/components/sign-in-page';
+import { ReviewQueuePage } from '../features/reviews/components/review-queue-page';
+import { TrendsPage } from '../features/trends/components/trends-page';
 import { Layout } from './layout';
 import { RequireAuth } from './require-auth';
 import { NotFoundPage } from './routes/not-found';
@@ -37,7 +39,7 @@ export const appRoutes: RouteObject[] = [
     path: 'trends',
     element: (
       <RequireAuth roles={['quality', 'admin', 'lead']}>
-        <Placeholder title="Trends" text="Quality measures across codes and units." />
+        <TrendsPage />
       </RequireAuth>
     ),
   },
@@ -45,7 +47,7 @@ export const appRoutes: RouteObject[] = [
     path: 'review',
     element: (
       <RequireAuth roles={['quality']}>
-        <Placeholder title="Review queue" text="Signed records awaiting review." />
+        <ReviewQueuePage />
       </RequireAuth>
     ),
   },

@@ -1,0 +1,91 @@
+import { Link } from '@mui/material';
+import { DataGrid, type GridColDef, type GridSortModel } from '@mui/x-data-grid';
+import type { TrendsFilter, TrendsRecord } from '@upstroke/contracts';
+import { useState } from 'react';
+import { Link as RouterLink } from 'react-router-dom';
+import { type RecordsPaging, useTrendRecords } from '../api/get-trend-records';
+import { ErrorState } from '../../../components/ui/states';
+
+const pct = (v: unknown) => (typeof v === 'number' ? `${Math.round(v * 100)} %` : '—');
+const sec = (v: unknown) => (typeof v === 'number' ? `${Math.round(v)} s` : '—');
+
+const columns: GridColDef<TrendsRecord>[] = [
+  {
+    field: 'arrestAt',
+    headerName: 'Arrest (UTC)',
+    width: 170,
+    renderCell: ({ row }) => (
+      <Link component={RouterLink} to={`/debrief/${row.resuscitationId}`}>
+        {row.arrestAt.slice(0, 16).replace('T', ' ')}
+      </Link>
+    ),
+  },
+  { field: 'unitName', headerName: 'Unit', width: 130, sortable: false },
+  { field: 'firstRhythm', headerName: 'First rhythm', width: 110, sortable: false },
+  { field: 'outcome', headerName: 'Outcome', width: 150, sortable: false },
+  {
+    field: 'compressionFraction',
+    headerName: 'Compression fraction',
+    width: 170,
+    valueFormatter: pct,
+  },
+  { field: 'fractionGe10', headerName: 'CPR time EtCO2 ≥ 10', width: 160, valueFormatter: pct },
+  { field: 'timeToFirstShockSec', headerName: 'First shock', width: 110, valueFormatter: sec },
+  {
+    field: 'timeToFirstEpinephrineSec',
+    headerName: 'First epinephrine',
+    width: 140,
+    valueFormatter: sec,
+  },
+  { field: 'preshockLongCount', headerName: 'Long pre-shock pauses', width: 170 },
+  {
+    field: 'reviewStatus',
+    headerName: 'Review',
+    width: 140,
+    sortable: false,
+    valueFormatter: (v) => v ?? 'awaiting',
+  },
+];
+
+/** The filtered records, sorted and paged by the server; each opens its Debrief. */
+export function RecordsGrid({ filter }: { filter: TrendsFilter }) {
+  const [paging, setPaging] = useState<RecordsPaging>({
+    sort: 'arrestAt',
+    order: 'desc',
+    limit: 25,
+    offset: 0,
+  });
+  const { data, isFetching, error, refetch } = useTrendRecords(filter, paging);
+  if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
+  const onSort = (model: GridSortModel) => {
+    const first = model[0];
+    setPaging((p) => ({
+      ...p,
+      offset: 0,
+      sort: (first?.field ?? 'arrestAt') as RecordsPaging['sort'],
+      order: first?.sort ?? 'desc',
+    }));
+  };
+  return (
+    <DataGrid
+      aria-label="Records"
+      rows={data?.items ?? []}
+      getRowId={(r) => r.resuscitationId}
+      columns={columns}
+      loading={isFetching}
+      rowCount={data?.total ?? 0}
+      paginationMode="server"
+      sortingMode="server"
+      disableColumnFilter
+      pageSizeOptions={[25, 50, 100]}
+      paginationModel={{ page: paging.offset / paging.limit, pageSize: paging.limit }}
+      onPaginationModelChange={(m) =>
+        setPaging((p) => ({ ...p, limit: m.pageSize, offset: m.page * m.pageSize }))
+      }
+      sortModel={[{ field: paging.sort, sort: paging.order }]}
+      onSortModelChange={onSort}
+      autoHeight
+      disableRowSelectionOnClick
+    />
+  );
+}
