@@ -11,6 +11,7 @@ import { AuditLogModule } from './modules/audit-log/audit-log.module';
 import { AuthModule } from './modules/auth/auth.module';
 import { DebriefModule } from './modules/debrief/debrief.module';
 import { ExportsModule } from './modules/exports/exports.module';
+import { ExportsModule } from './modules/exports/exports.module';
 import { HealthModule } from './modules/health/health.module';
 import { ImportsModule } from './modules/imports/imports.module';
 import { LinkModule } from './modules/link/link.module';
@@ -48,6 +49,7 @@ export class AppModule {
         ImportsModule,
         ResuscitationsModule,
         DebriefModule,
+        ExportsModule,
         ExportsModule,
         SummariesModule,
         TrendsModule,

@@ -1,50 +1,10 @@
 import { randomUUID } from 'node:crypto';
 import type { Debrief } from '@upstroke/contracts';
-import { aResuscitation, anEtco2, anEvent } from './factories';
+import { recordWithFindings, signedRecord as signed } from './debrief-fixtures';
+import { anEvent } from './factories';
 import { startTestApp, type TestApp } from './test-app';
 
 type Role = 'recorder' | 'lead' | 'quality' | 'admin';
-
-/** A record with low EtCO2 during compressions, a long pre-shock pause and epinephrine. */
-export async function recordWithFindings(t: TestApp, token: string) {
-  const rec = aResuscitation({ location: 'Bay 4', patientRef: 'MRN-TEST-1' });
-  const set = ['Authorization', `Bearer ${token}`] as const;
-  await t
-    .http()
-    .post('/api/resuscitations')
-    .set(...set)
-    .send(rec)
-    .expect(201);
-  const events = [
-    anEvent('arrest', 0, { witnessed: true }),
-    anEvent('compressions-start', 10),
-    anEvent('rhythm', 15, { rhythm: 'vf' }),
-    anEvent('compressions-stop', 120),
-    anEvent('shock', 140, { energyJ: 200 }),
-    anEvent('compressions-start', 142),
-    anEvent('drug', 200, { drug: 'epinephrine', dose: 1, unit: 'mg', route: 'iv' }),
-    anEvent('compressions-stop', 400),
-    anEvent('rosc', 405),
-    anEvent('end', 500, { reason: 'rosc-sustained' }),
-  ];
-  await t
-    .http()
-    .post(`/api/resuscitations/${rec.id}/events/batch`)
-    .set(...set)
-    .send({ events })
-    .expect(201);
-  // 5 mmHg for two minutes of compressions: below the 10 mmHg default (AHA 2020; Sandroni 2018).
-  const samples = [20, 40, 60, 80, 100, 120, 200, 260, 320, 380].map((s, i) =>
-    anEtco2(s, i < 6 ? 5 : 25),
-  );
-  await t
-    .http()
-    .post(`/api/resuscitations/${rec.id}/etco2/batch`)
-    .set(...set)
-    .send({ samples })
-    .expect(201);
-  return { rec, events };
-}
 
 describe('debrief, signing and the lock', () => {
   let t: TestApp;
@@ -131,22 +91,7 @@ describe('debrief, signing and the lock', () => {
     expect(await t.db('recordSummaries').where({ resuscitationId: rec.id })).toHaveLength(1);
   });
 
-  async function signedRecord() {
-    const made = await recordWithFindings(t, await t.tokenFor('lead'));
-    const url = `/api/resuscitations/${made.rec.id}`;
-    await t
-      .http()
-      .patch(url)
-      .set(...(await auth('lead')))
-      .send({ outcome: 'died', firstRhythm: 'vf', witnessed: true, monitored: true })
-      .expect(200);
-    await t
-      .http()
-      .post(`${url}/sign`)
-      .set(...(await auth('lead')))
-      .expect(200);
-    return { ...made, url };
-  }
+  const signedRecord = () => signed(t);
 
   it('refuses API edits of a signed record with 409', async () => {
     const { url } = await signedRecord();

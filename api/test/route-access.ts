@@ -25,6 +25,8 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'POST /api/resuscitations/{id}/amendments': ['lead'],
   'GET /api/resuscitations/{id}/report.pdf': ['lead', 'quality'],
   'GET /api/resuscitations/{id}/fhir': ['lead', 'quality'],
+  'GET /api/resuscitations/{id}/report.pdf': ['lead', 'quality'],
+  'GET /api/resuscitations/{id}/fhir': ['lead', 'quality'],
   'GET /api/context': everyone,
   'POST /api/auth/set-password': 'public',
   'GET /api/users': admin,

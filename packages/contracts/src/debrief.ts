@@ -1,3 +1,4 @@
+export * from './event-labels.js';
 import { z } from 'zod';
 import { analysisOutputSchema, etco2PointSchema } from './analysis.js';
 import { isoDateTimeSchema, uuidSchema } from './common.js';

@@ -1,0 +1,54 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { Debrief } from '@upstroke/contracts';
+import type { AuthUser } from '../../common/auth.decorators';
+import { forbidden } from '../../common/errors';
+import { APP_CONFIG, type AppConfig } from '../../config';
+import { DebriefService } from '../debrief/debrief.service';
+import { type FhirBundle, toFhirBundle } from './fhir/fhir-bundle';
+import { renderReportPdf } from './pdf/report-pdf';
+import { appVersion } from './version';
+
+/**
+ * Chart exports. Leads export (PRODUCT.md: PDF/FHIR export is the lead's); the quality
+ * committee reads every record on its sites, so it may download them too. Recorders and
+ * admins may not: exports leave the app with patient data.
+ */
+@Injectable()
+export class ExportsService {
+  constructor(
+    private readonly debrief: DebriefService,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {}
+
+  private async load(user: AuthUser, id: string): Promise<Debrief> {
+    if (user.role !== 'lead' && user.role !== 'quality')
+      throw forbidden('Only leads and the quality committee export records');
+    return this.debrief.forUser(user, id);
+  }
+
+  async pdf(user: AuthUser, id: string): Promise<{ file: Buffer; name: string }> {
+    const d = await this.load(user, id);
+    return { file: await this.pdfOf(d), name: fileName(d, 'pdf') };
+  }
+
+  /** Renders an already loaded debrief (also used to attach it to e-mail). */
+  pdfOf(d: Debrief): Promise<Buffer> {
+    return renderReportPdf(d, {
+      version: appVersion(),
+      generatedAt: new Date(),
+      timeZone: process.env.REPORT_TIME_ZONE,
+    });
+  }
+
+  async fhir(user: AuthUser, id: string): Promise<FhirBundle> {
+    if (user.role !== 'lead' && user.role !== 'quality')
+      throw forbidden('Only leads and the quality committee export records');
+    const { debrief, waveform } = await this.debrief.withWaveform(user, id);
+    return toFhirBundle(debrief, { publicUrl: this.config.publicUrl, waveform });
+  }
+}
+
+export function fileName(d: Debrief, ext: string): string {
+  const date = d.record.arrestAt.slice(0, 10);
+  return `resuscitation-${date}-${d.record.id.slice(0, 8)}.${ext}`;
+}

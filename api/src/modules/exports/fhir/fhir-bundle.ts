@@ -1,0 +1,167 @@
+import { createHash } from 'node:crypto';
+import { arrayToMmHg } from '@upstroke/capno';
+import { type Debrief, type DebriefEvent, drugName, type Waveform } from '@upstroke/contracts';
+import type * as R4 from './r4';
+import {
+  type Ctx,
+  cprProcedure,
+  encounterOf,
+  etco2Observations,
+  waveformObservation,
+} from './resources';
+
+export type FhirBundle = R4.Bundle;
+
+/** SNOMED CT 410429000 "Cardiac arrest (disorder)" (REFERENCE.md: SNOMED CT, checked). */
+export const SNOMED_CARDIAC_ARREST = '410429000';
+export const SNOMED = 'http://snomed.info/sct';
+/** Our own code system for event kinds that have no checked standard code here. */
+export const UPSTROKE_EVENT = 'urn:upstroke:event-kind';
+
+/**
+ * A name-based UUID (RFC 4122 version 5 layout over SHA-1): the same record always gives
+ * the same fullUrls, so a re-export replaces rather than duplicates in the receiving system.
+ */
+export function stableUuid(name: string): string {
+  const h = createHash('sha1').update(`upstroke:${name}`).digest();
+  h[6] = (h[6] & 0x0f) | 0x50;
+  h[8] = (h[8] & 0x3f) | 0x80;
+  const x = h.subarray(0, 16).toString('hex');
+  return `${x.slice(0, 8)}-${x.slice(8, 12)}-${x.slice(12, 16)}-${x.slice(16, 20)}-${x.slice(20)}`;
+}
+
+/** Events as finally recorded: superseded ones left out, corrections' replacements in. */
+export function effectiveEvents(events: readonly DebriefEvent[]): DebriefEvent[] {
+  const out: DebriefEvent[] = [];
+  for (const e of events) {
+    if (e.supersededBy) continue;
+    if (e.kind !== 'correction') out.push(e);
+    else {
+      const r = e.data.replacement as
+        { kind: DebriefEvent['kind']; data: Record<string, unknown>; at: string } | undefined;
+      if (r) out.push({ ...e, kind: r.kind, data: r.data, at: r.at });
+    }
+  }
+  return out;
+}
+
+export interface FhirOptions {
+  publicUrl: string;
+  waveform?: Waveform;
+}
+
+/**
+ * The signed record as a FHIR R4 `collection` Bundle: Patient (by reference number),
+ * Encounter, Condition (cardiac arrest), Procedure for CPR and per shock,
+ * MedicationAdministration per drug, Observations for EtCO2 (values and the capnogram).
+ */
+export function toFhirBundle(d: Debrief, opts: FhirOptions): FhirBundle {
+  const id = d.record.id;
+  const url = (key: string) => `urn:uuid:${stableUuid(`${id}/${key}`)}`;
+  const ctx = {
+    d,
+    url,
+    subject: { reference: url('patient') },
+    encounter: { reference: url('encounter') },
+  };
+  const entries: { key: string; resource: R4.Resource }[] = [];
+  const add = (key: string, resource: R4.Resource) => entries.push({ key, resource });
+  const patient: R4.Patient = { resourceType: 'Patient' };
+  if (d.record.patientRef)
+    patient.identifier = [{ system: 'urn:upstroke:patient-ref', value: d.record.patientRef }];
+  add('patient', patient);
+  add('encounter', encounterOf(ctx));
+  add('condition', {
+    resourceType: 'Condition',
+    clinicalStatus: {
+      coding: [
+        {
+          system: 'http://terminology.hl7.org/CodeSystem/condition-clinical',
+          code: d.measures.roscPeriods?.length ? 'resolved' : 'active',
+        },
+      ],
+    },
+    verificationStatus: {
+      coding: [
+        { system: 'http://terminology.hl7.org/CodeSystem/condition-ver-status', code: 'confirmed' },
+      ],
+    },
+    code: {
+      coding: [
+        { system: SNOMED, code: SNOMED_CARDIAC_ARREST, display: 'Cardiac arrest (disorder)' },
+      ],
+      text: 'Cardiac arrest',
+    },
+    subject: ctx.subject,
+    encounter: ctx.encounter,
+    onsetDateTime: d.record.arrestAt,
+  });
+  const cpr = cprProcedure(ctx);
+  if (cpr) add('cpr', cpr);
+  for (const e of effectiveEvents(d.events)) {
+    if (e.kind === 'shock') add(`shock/${e.id}`, shockProcedure(ctx, e));
+    if (e.kind === 'drug') add(`drug/${e.id}`, medicationOf(ctx, e));
+  }
+  for (const [key, obs] of etco2Observations(ctx)) add(key, obs);
+  if (opts.waveform)
+    add(
+      'waveform',
+      waveformObservation(
+        ctx,
+        opts.waveform,
+        arrayToMmHg(opts.waveform.values, opts.waveform.unit),
+      ),
+    );
+  return {
+    resourceType: 'Bundle',
+    id: stableUuid(`${id}/bundle`),
+    identifier: { system: `${opts.publicUrl}/api/resuscitations`, value: id },
+    type: 'collection',
+    timestamp: d.record.signedAt ?? new Date().toISOString(),
+    entry: entries.map((e) => ({ fullUrl: url(e.key), resource: e.resource })),
+  };
+}
+
+function shockProcedure(ctx: Ctx, e: DebriefEvent): R4.Procedure {
+  return {
+    resourceType: 'Procedure',
+    status: 'completed',
+    // No standard code is asserted here (not checked); our own code plus plain text.
+    code: {
+      coding: [{ system: UPSTROKE_EVENT, code: 'shock', display: 'Defibrillation shock' }],
+      text: 'Defibrillation shock',
+    },
+    subject: ctx.subject,
+    encounter: ctx.encounter,
+    performedDateTime: e.at,
+    note: typeof e.data.energyJ === 'number' ? [{ text: `${e.data.energyJ} J` }] : undefined,
+  };
+}
+
+function medicationOf(ctx: Ctx, e: DebriefEvent): R4.MedicationAdministration {
+  const dose =
+    typeof e.data.dose === 'number' && typeof e.data.unit === 'string'
+      ? {
+          value: e.data.dose,
+          unit: e.data.unit,
+          system: 'http://unitsofmeasure.org',
+          code: e.data.unit,
+        }
+      : undefined;
+  const route =
+    typeof e.data.route === 'string'
+      ? { text: e.data.route === 'io' ? 'Intraosseous' : 'Intravenous' }
+      : undefined;
+  return {
+    resourceType: 'MedicationAdministration',
+    status: 'completed',
+    medicationCodeableConcept: {
+      coding: [{ system: 'urn:upstroke:drug', code: String(e.data.drug) }],
+      text: drugName(e.data),
+    },
+    subject: ctx.subject,
+    context: ctx.encounter,
+    effectiveDateTime: e.at,
+    dosage: dose || route ? { dose, route } : undefined,
+  };
+}

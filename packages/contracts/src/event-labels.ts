@@ -1,0 +1,161 @@
+/**
+ * Plain words for events, findings and closing details, shared by the Debrief screen, the
+ * PDF and the FHIR export so that the record reads the same everywhere.
+ */
+
+const rhythmNames: Record<string, string> = {
+  vf: 'VF',
+  pvt: 'pulseless VT',
+  pea: 'PEA',
+  asystole: 'asystole',
+  organised: 'organised rhythm',
+};
+
+const drugNames: Record<string, string> = {
+  epinephrine: 'Epinephrine',
+  amiodarone: 'Amiodarone',
+  lidocaine: 'Lidocaine',
+  'sodium-bicarbonate': 'Sodium bicarbonate',
+  calcium: 'Calcium',
+  magnesium: 'Magnesium',
+  other: 'Other drug',
+};
+
+const airwayNames: Record<string, string> = {
+  'bag-mask': 'Bag-mask',
+  supraglottic: 'Supraglottic airway',
+  'tracheal-tube': 'Tracheal tube',
+};
+
+export const eventKindLabels: Record<string, string> = {
+  arrest: 'Arrest',
+  'compressions-start': 'Compressions on',
+  'compressions-stop': 'Compressions off',
+  shock: 'Shock',
+  drug: 'Drug',
+  airway: 'Airway',
+  ventilation: 'Ventilation change',
+  rhythm: 'Rhythm',
+  pulse: 'Pulse check',
+  rosc: 'ROSC',
+  rearrest: 'Re-arrest',
+  access: 'Access',
+  note: 'Note',
+  end: 'End',
+  correction: 'Correction',
+};
+
+export function rhythmName(r: string | null | undefined): string {
+  return r ? (rhythmNames[r] ?? r) : '—';
+}
+
+export function drugName(data: Record<string, unknown>): string {
+  const d = String(data.drug ?? 'other');
+  return d === 'other' && typeof data.name === 'string' ? data.name : (drugNames[d] ?? d);
+}
+
+function str(v: unknown): string {
+  return typeof v === 'string' || typeof v === 'number' ? String(v) : '';
+}
+
+/** The details column of an event: what was given, found or decided. */
+export function eventDetails(kind: string, data: Record<string, unknown>): string {
+  switch (kind) {
+    case 'arrest': {
+      const parts = [];
+      if (typeof data.witnessed === 'boolean')
+        parts.push(data.witnessed ? 'witnessed' : 'unwitnessed');
+      if (typeof data.monitored === 'boolean')
+        parts.push(data.monitored ? 'monitored' : 'not monitored');
+      return parts.join(', ');
+    }
+    case 'shock':
+      return `${str(data.energyJ)} J`;
+    case 'drug': {
+      const dose = data.dose !== undefined ? `${str(data.dose)} ${str(data.unit)}`.trim() : '';
+      const route = data.route ? String(data.route).toUpperCase() : '';
+      return [drugName(data), dose, route].filter(Boolean).join(' ');
+    }
+    case 'airway': {
+      const conf = data.confirmation
+        ? `, confirmed by ${String(data.confirmation).replace(/-/g, ' ')}`
+        : '';
+      return `${airwayNames[String(data.device)] ?? str(data.device)}${conf}`;
+    }
+    case 'ventilation':
+      return data.ratePerMin !== undefined ? `${str(data.ratePerMin)} /min` : '';
+    case 'rhythm':
+      return rhythmName(str(data.rhythm));
+    case 'pulse':
+      return data.present ? 'pulse present' : 'no pulse';
+    case 'access':
+      return str(data.route).toUpperCase();
+    case 'note':
+      return str(data.text);
+    case 'end':
+      return str(data.reason).replace(/-/g, ' ');
+    case 'correction':
+      return typeof data.reason === 'string' ? data.reason : '';
+    default:
+      return '';
+  }
+}
+
+/** One line for an event: "Shock 200 J", "Drug Epinephrine 1 mg IV". */
+export function eventLabel(kind: string, data: Record<string, unknown>): string {
+  if (kind === 'drug') return eventDetails(kind, data);
+  const details = eventDetails(kind, data);
+  const name = eventKindLabels[kind] ?? kind;
+  return details && kind !== 'note' ? `${name}: ${details}` : name;
+}
+
+export const outcomeLabels: Record<string, string> = {
+  'rosc-sustained': 'ROSC, sustained',
+  'rosc-not-sustained': 'ROSC, not sustained',
+  died: 'Died',
+  transferred: 'Transferred',
+};
+
+export const findingKindLabels: Record<string, string> = {
+  'etco2-low': 'Low EtCO2',
+  'etco2-rise': 'EtCO2 rise',
+  'etco2-prognosis-caution': 'EtCO2 after 20 min',
+  'pause-long': 'Long pause',
+  'preshock-pause-long': 'Long pre-shock pause',
+  'rhythm-check-late': 'Late rhythm check',
+  'epinephrine-interval': 'Epinephrine interval',
+  'ventilation-fast': 'Fast ventilation',
+  'waveform-absent': 'No waveform',
+  'airway-unconfirmed': 'Airway unconfirmed',
+  rebreathing: 'Rebreathing',
+};
+
+/** "12:05" from seconds after the arrest ("-0:10" before it). */
+export function clockFromArrest(sec: number): string {
+  const sign = sec < 0 ? '-' : '';
+  const s = Math.round(Math.abs(sec));
+  const h = Math.floor(s / 3600);
+  const m = Math.floor((s % 3600) / 60);
+  const r = String(s % 60).padStart(2, '0');
+  return h > 0 ? `${sign}${h}:${String(m).padStart(2, '0')}:${r}` : `${sign}${m}:${r}`;
+}
+
+/** What each measure on the Debrief screen and in the PDF means (help text). */
+export const measureDefinitions = {
+  duration: 'From the arrest (time zero) to the end of the record.',
+  compressionFraction:
+    'Time with compressions on ÷ time without circulation (arrest to first ROSC or end, leaving out intervals with a pulse). Goal > 80 % (Meaney 2013).',
+  longestPause: 'The longest interval with compressions off while there was no circulation.',
+  preShockPauses:
+    'Pauses around a shock: compressions off to the shock (pre-shock) and the whole pause. Interruptions should stay < 10 s (AHA).',
+  firstShock: 'Time from the arrest to the first shock.',
+  firstEpinephrine: 'Time from the arrest to the first epinephrine dose.',
+  epinephrineIntervals:
+    'Time between successive epinephrine doses; guidelines give every 3–5 min (AHA 2020).',
+  ventilationRate: 'Median breaths per minute from the capnogram (breath to breath).',
+  etco2Median: 'Median EtCO2 during compressions, from every source (entered, streamed, imported).',
+  etco2Above10:
+    'Share of compression time with EtCO2 at or above 10 mmHg (AHA 2020: below 10 suggests poor CPR).',
+  etco2Above20:
+    'Share of compression time with EtCO2 at or above 20 mmHg (target used by Meaney 2013).',
+} as const;
