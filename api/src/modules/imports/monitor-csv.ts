@@ -1,7 +1,7 @@
 import { Transform, type Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { IMPORT_MAX_ERRORS, type Co2Unit } from '@upstroke/contracts';
-import { parse } from 'csv-parse';
+import { CsvError, parse } from 'csv-parse';
 import { type Columns, readCo2, readDirective, readHeader, readTime, readUnit } from './csv-fields';
 
 export interface CsvRow {
@@ -15,6 +15,11 @@ export interface CsvRow {
 export interface LineError {
   line: number;
   message: string;
+}
+
+interface ParsedRecord {
+  record: string[];
+  info: { lines: number };
 }
 
 class EncodingError extends Error {
@@ -72,6 +77,7 @@ export class MonitorCsvReader {
   private columns: Columns | null = null;
   private lastMs = -Infinity;
   private fatal = false;
+  private stoppedEarly = false;
 
   async read(input: Readable, onRow: (row: CsvRow) => void | Promise<void>): Promise<void> {
     const parser = parse({
@@ -80,20 +86,28 @@ export class MonitorCsvReader {
       bom: true,
       info: true,
     });
-    const feeding = pipeline(input, utf8Guard(), parser).catch((e: unknown) => this.streamError(e));
-    for await (const rec of parser as AsyncIterable<{
-      record: string[];
-      info: { lines: number };
-    }>) {
-      const row = this.line(rec.record, rec.info.lines);
-      if (row) await onRow(row);
-      if (this.fatal || this.errors.length >= IMPORT_MAX_ERRORS) {
-        input.destroy();
-        parser.destroy();
-        break;
+    let failure: unknown = null;
+    const feeding = pipeline(input, utf8Guard(), parser).catch((e: unknown) => {
+      failure ??= e;
+    });
+    try {
+      for await (const rec of parser as AsyncIterable<ParsedRecord>) {
+        const row = this.line(rec.record, rec.info.lines);
+        if (row) await onRow(row);
+        if (this.fatal || this.errors.length >= IMPORT_MAX_ERRORS) {
+          this.stoppedEarly = true;
+          break;
+        }
       }
+    } catch (e) {
+      // A stream error (encoding, CSV syntax) surfaces here and in the pipeline: keep one.
+      failure = e;
+    } finally {
+      input.destroy();
+      parser.destroy();
     }
     await feeding;
+    if (failure) this.streamError(failure);
     if (!this.fatal && this.errors.length === 0) this.finish();
     this.errors.sort((a, b) => a.line - b.line);
     this.errors.splice(IMPORT_MAX_ERRORS);
@@ -103,10 +117,10 @@ export class MonitorCsvReader {
     const err = e as { code?: unknown; lines?: number; message?: string } | null;
     const code = typeof err?.code === 'string' ? err.code : '';
     if (e instanceof EncodingError) this.fail(e.line, e.message);
-    else if (code.startsWith('CSV_')) {
+    else if (e instanceof CsvError || code.startsWith('CSV_')) {
       const text = String(err?.message ?? 'unreadable').replace(/^Invalid\s+/i, '');
       this.fail(err?.lines ?? 0, `csv: ${text.slice(0, 160)}`);
-    } else if (code !== 'ERR_STREAM_PREMATURE_CLOSE') throw e;
+    } else if (!this.stoppedEarly) throw e; // else: the abort of our own early stop
   }
 
   private fail(line: number, message: string): void {
