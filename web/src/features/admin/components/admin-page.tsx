@@ -35,17 +35,17 @@ export function AdminPage() {
             value={t.path}
             label={t.label}
             component={Link}
-            to={t.path}
+            to={`/admin/${t.path}`}
             sx={{ minHeight: 48 }}
           />
         ))}
       </Tabs>
       <Routes>
-        <Route index element={<Navigate to="users" replace />} />
+        <Route index element={<Navigate to="/admin/users" replace />} />
         {tabs.map((t) => (
           <Route key={t.path} path={t.path} element={t.element} />
         ))}
-        <Route path="*" element={<Navigate to="users" replace />} />
+        <Route path="*" element={<Navigate to="/admin/users" replace />} />
       </Routes>
     </>
   );
