@@ -29,7 +29,10 @@ describe('review queue', () => {
     const q = await queue();
     expect(q.total).toBe(rows.length);
     const times = q.items.map((i) => Date.parse(i.arrestAt));
+    expect(times.every(Number.isFinite)).toBe(true);
     expect(times).toEqual([...times].sort((a, b) => a - b));
+    expect(q.items.map((i) => i.resuscitationId).sort()).toEqual(rows.map((r) => r.id).sort());
+    expect(q.items[0]).toMatchObject({ siteName: 'Kestrel Bay Regional Hospital', status: null });
   });
 
   it('records a status with a comment, keeps the history and shrinks the queue', async () => {

@@ -36,9 +36,11 @@ export class ReviewsRepository {
       where r.status = 'signed' and r.site_id = any(?) and ${statusWhere[q.status]}`;
     const [{ rows: items }, { rows: count }] = await Promise.all([
       this.db.raw<{ rows: Record<string, unknown>[] }>(
-        `select r.id as resuscitation_id, r.site_id, s.name as site_name, u.name as unit_name,
-          r.arrest_at, r.signed_at, r.first_rhythm, r.outcome, lr.status,
-          lr.comment as last_comment, lr.at as last_review_at
+        // Raw rows are not renamed by the knex wrapper: camelCase aliases here.
+        `select r.id as "resuscitationId", r.site_id as "siteId", s.name as "siteName",
+          u.name as "unitName", r.arrest_at as "arrestAt", r.signed_at as "signedAt",
+          r.first_rhythm as "firstRhythm", r.outcome, lr.status,
+          lr.comment as "lastComment", lr.at as "lastReviewAt"
         ${from} order by r.arrest_at, r.id limit ? offset ?`,
         [siteIds, q.limit, q.offset],
       ),
