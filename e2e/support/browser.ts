@@ -1,12 +1,11 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
 import { baseUrl, type DemoRole, demoPassword, emailOf } from './env';
 
-/** Debian's Chromium, headless, with the flags this closed network needs. */
+/**
+ * Debian's Chromium, headless, with the flags this closed network needs. Playwright gives
+ * every launch a fresh, empty profile of its own (it refuses a --user-data-dir here).
+ */
 export async function launchBrowser(): Promise<{ browser: Browser; close: () => Promise<void> }> {
-  const userDataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'upstroke-e2e-'));
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: [
@@ -17,15 +16,11 @@ export async function launchBrowser(): Promise<{ browser: Browser; close: () => 
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
-      `--user-data-dir=${userDataDir}`,
     ],
   });
   return {
     browser,
-    close: async () => {
-      await browser.close();
-      fs.rmSync(userDataDir, { recursive: true, force: true });
-    },
+    close: () => browser.close(),
   };
 }
 
