@@ -3,6 +3,13 @@ import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router-dom';
 import { AppProvider } from './app/provider';
 import { createRouter } from './app/router';
+import { statusSlot } from './app/status-slot';
+import { StatusArea } from './features/board/components/status-area';
+import { startSync } from './lib/offline';
+
+// The top bar shows the sync state everywhere, and the outbox drains in the background.
+statusSlot.set(StatusArea);
+startSync();
 
 const router = createRouter();
 

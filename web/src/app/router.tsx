@@ -2,6 +2,8 @@ import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { SetPasswordPage } from '../features/account/components/set-password-page';
 import { AdminPage } from '../features/admin/components/admin-page';
 import { SignInPage } from '../features/auth/components/sign-in-page';
+import { BoardPage } from '../features/board/components/board-page';
+import { LivePage } from '../features/live/components/live-page';
 import { ReviewQueuePage } from '../features/reviews/components/review-queue-page';
 import { TrendsPage } from '../features/trends/components/trends-page';
 import { Layout } from './layout';
@@ -15,7 +17,7 @@ export const appRoutes: RouteObject[] = [
     index: true,
     element: (
       <RequireAuth roles={['recorder', 'lead', 'quality']}>
-        <Placeholder title="Board" text="Resuscitations in progress and recent records." />
+        <BoardPage />
       </RequireAuth>
     ),
   },
@@ -23,7 +25,7 @@ export const appRoutes: RouteObject[] = [
     path: 'live/:id',
     element: (
       <RequireAuth roles={['recorder', 'lead']}>
-        <Placeholder title="Live" text="Live recording." />
+        <LivePage />
       </RequireAuth>
     ),
   },

@@ -1,0 +1,52 @@
+import { List, ListItem, ListItemText, Paper, Typography } from '@mui/material';
+import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
+import { formatDuration } from '../../../lib/format';
+
+function describe(e: LocalEvent): string {
+  const d = e.data;
+  switch (e.kind) {
+    case 'shock':
+      return `Shock ${String(d.energyJ)} J`;
+    case 'drug':
+      return `${String(d.drug)} ${d.dose ?? ''} ${d.unit ?? ''} ${d.route ? String(d.route).toUpperCase() : ''}`.trim();
+    case 'note':
+      return `Note: ${String(d.text)}`;
+    case 'correction':
+      return 'Undo (correction)';
+    default:
+      return [e.kind, ...Object.values(d).map(String)].join(' ');
+  }
+}
+
+/** What this tablet has recorded, newest first, with a mark for values not yet on the server. */
+export function EventLog(props: { arrestAt: string; events: LocalEvent[]; etco2: LocalEtco2[] }) {
+  const t0 = Date.parse(props.arrestAt);
+  const rows = [
+    ...props.events.map((e) => ({ id: e.id, at: e.at, text: describe(e), synced: e.synced })),
+    ...props.etco2.map((v) => ({
+      id: v.id,
+      at: v.at,
+      text: `EtCO2 ${v.value} ${v.unit}`,
+      synced: v.synced,
+    })),
+  ].sort((a, b) => b.at.localeCompare(a.at));
+  return (
+    <Paper variant="outlined" sx={{ p: 1 }}>
+      <Typography variant="subtitle2" component="h2">
+        Recorded: {props.events.length} events, {props.etco2.length} EtCO2 values
+      </Typography>
+      <List dense aria-label="Recorded events" sx={{ maxHeight: 220, overflow: 'auto' }}>
+        {rows.map((r) => (
+          <ListItem key={r.id} disableGutters>
+            <ListItemText
+              primary={`${formatDuration((Date.parse(r.at) - t0) / 1000)}  ${r.text}`}
+              secondary={
+                r.synced === 0 ? 'waiting' : r.synced === 2 ? 'refused by server (kept here)' : null
+              }
+            />
+          </ListItem>
+        ))}
+      </List>
+    </Paper>
+  );
+}

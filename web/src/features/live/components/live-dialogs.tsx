@@ -1,0 +1,114 @@
+import type { EventData, EventKind, Thresholds } from '@upstroke/contracts';
+import { AirwayDialog } from './airway-dialog';
+import { ChoiceDialog } from './choice-dialog';
+import { DrugDialog } from './drug-dialog';
+import { Etco2Keypad } from './etco2-keypad';
+import { NoteDialog } from './note-dialog';
+import { ShockDialog } from './shock-dialog';
+
+export type DialogName =
+  'shock' | 'drug' | 'airway' | 'rhythm' | 'pulse' | 'access' | 'note' | 'etco2' | 'end';
+
+type Record = <K extends EventKind>(kind: K, data: EventData<K>) => void;
+
+const rhythms = [
+  { label: 'VF', value: 'vf' },
+  { label: 'pVT', value: 'pvt' },
+  { label: 'PEA', value: 'pea' },
+  { label: 'Asystole', value: 'asystole' },
+  { label: 'Organised', value: 'organised' },
+] as const;
+const endReasons = [
+  { label: 'Sustained ROSC', value: 'rosc-sustained' },
+  { label: 'Terminated', value: 'terminated' },
+  { label: 'Transferred', value: 'transferred' },
+] as const;
+
+/** The quick dialogs behind the Live buttons; each records one event and closes. */
+export function LiveDialogs(props: {
+  open: DialogName | null;
+  onClose: () => void;
+  record: Record;
+  onEtco2: (value: number) => void;
+  thresholds: Thresholds;
+  etco2Unit: 'mmHg' | 'kPa';
+  weightKg?: number;
+  shocksGiven: number;
+}) {
+  const { open, onClose, record } = props;
+  const done =
+    <K extends EventKind>(kind: K) =>
+    (data: EventData<K>) => {
+      record(kind, data);
+      onClose();
+    };
+  return (
+    <>
+      <ShockDialog
+        open={open === 'shock'}
+        weightKg={props.weightKg}
+        thresholds={props.thresholds}
+        shocksGiven={props.shocksGiven}
+        onShock={(energyJ) => done('shock')({ energyJ })}
+        onClose={onClose}
+      />
+      <DrugDialog
+        open={open === 'drug'}
+        weightKg={props.weightKg}
+        thresholds={props.thresholds}
+        onDrug={done('drug')}
+        onClose={onClose}
+      />
+      <AirwayDialog
+        open={open === 'airway'}
+        onAirway={(d) => record('airway', d)}
+        onClose={onClose}
+      />
+      <ChoiceDialog
+        open={open === 'rhythm'}
+        title="Rhythm"
+        choices={[...rhythms]}
+        onPick={(rhythm) => done('rhythm')({ rhythm })}
+        onClose={onClose}
+      />
+      <ChoiceDialog
+        open={open === 'pulse'}
+        title="Pulse"
+        choices={[
+          { label: 'Pulse present', value: true },
+          { label: 'No pulse', value: false },
+        ]}
+        onPick={(present) => done('pulse')({ present })}
+        onClose={onClose}
+      />
+      <ChoiceDialog
+        open={open === 'access'}
+        title="Access"
+        choices={[
+          { label: 'IV', value: 'iv' as const },
+          { label: 'IO', value: 'io' as const },
+        ]}
+        onPick={(route) => done('access')({ route })}
+        onClose={onClose}
+      />
+      <ChoiceDialog
+        open={open === 'end'}
+        title="End the code"
+        choices={[...endReasons]}
+        onPick={(reason) => done('end')({ reason })}
+        onClose={onClose}
+      />
+      <NoteDialog
+        open={open === 'note'}
+        onNote={(text) => done('note')({ text })}
+        onClose={onClose}
+      />
+      <Etco2Keypad
+        open={open === 'etco2'}
+        unit={props.etco2Unit}
+        onValue={props.onEtco2}
+        onClose={onClose}
+      />
+    </>
+  );
+}

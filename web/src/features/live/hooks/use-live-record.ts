@@ -1,0 +1,70 @@
+import { useQuery } from '@tanstack/react-query';
+import {
+  type Resuscitation,
+  resuscitationSchema,
+  type Thresholds,
+  thresholdDefaults,
+} from '@upstroke/contracts';
+import { useLiveQuery } from 'dexie-react-hooks';
+import { useEffect } from 'react';
+import { apiFetch } from '../../../lib/api-client';
+import { offlineDb } from '../../../lib/offline';
+
+/**
+ * The record, its events and EtCO2 values as this tablet holds them (IndexedDB first). A
+ * record started on another tablet is fetched once and kept locally so Live works offline.
+ */
+export function useLiveRecord(id: string) {
+  const record = useLiveQuery(() => offlineDb.resuscitations.get(id), [id], null);
+  const events = useLiveQuery(
+    () =>
+      offlineDb.events.where('[resuscitationId+at]').between([id, ''], [id, '\uffff']).toArray(),
+    [id],
+    [],
+  );
+  const etco2 = useLiveQuery(
+    () => offlineDb.etco2.where('[resuscitationId+at]').between([id, ''], [id, '\uffff']).toArray(),
+    [id],
+    [],
+  );
+  const remote = useQuery({
+    queryKey: ['resuscitations', id, 'summary'],
+    queryFn: () => apiFetch(`/resuscitations/${id}`, { schema: resuscitationSchema }),
+    enabled: record === undefined,
+  });
+  useEffect(() => {
+    if (record === undefined && remote.data) void adopt(remote.data);
+  }, [record, remote.data]);
+  return { record, events, etco2, loadError: record === undefined ? remote.error : null };
+}
+
+async function adopt(r: Resuscitation): Promise<void> {
+  await offlineDb.resuscitations.put({
+    id: r.id,
+    siteId: r.siteId,
+    unitId: r.unitId ?? undefined,
+    arrestAt: r.arrestAt,
+    location: r.location ?? undefined,
+    patientRef: r.patientRef ?? undefined,
+    ageGroup: r.ageGroup ?? undefined,
+    weightKg: r.weightKg ?? undefined,
+    roster: r.roster ?? [],
+    status: r.status === 'open' ? 'open' : 'closed',
+    local: 0,
+    createdAt: Date.now(),
+  });
+}
+
+/** The site's thresholds and EtCO2 unit from the cached context (defaults when unknown). */
+export function useSiteSettings(siteId: string | undefined): {
+  thresholds: Thresholds;
+  etco2Unit: 'mmHg' | 'kPa';
+} {
+  const context = useLiveQuery(() => offlineDb.meta.get('context'), []);
+  const sites = context && 'sites' in context.value ? context.value.sites : [];
+  const site = sites.find((s) => s.id === siteId);
+  return {
+    thresholds: site?.profile?.thresholds ?? thresholdDefaults,
+    etco2Unit: site?.etco2Unit ?? 'mmHg',
+  };
+}
