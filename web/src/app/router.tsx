@@ -3,13 +3,13 @@ import { SetPasswordPage } from '../features/account/components/set-password-pag
 import { AdminPage } from '../features/admin/components/admin-page';
 import { SignInPage } from '../features/auth/components/sign-in-page';
 import { BoardPage } from '../features/board/components/board-page';
+import { DebriefPage } from '../features/debrief/components/debrief-page';
 import { LivePage } from '../features/live/components/live-page';
 import { ReviewQueuePage } from '../features/reviews/components/review-queue-page';
 import { TrendsPage } from '../features/trends/components/trends-page';
 import { Layout } from './layout';
 import { RequireAuth } from './require-auth';
 import { NotFoundPage } from './routes/not-found';
-import { Placeholder } from './routes/placeholder';
 
 /** Screens inside the signed-in frame; each names the roles that may open it. */
 export const appRoutes: RouteObject[] = [
@@ -33,7 +33,7 @@ export const appRoutes: RouteObject[] = [
     path: 'debrief/:id',
     element: (
       <RequireAuth roles={['recorder', 'lead', 'quality']}>
-        <Placeholder title="Debrief" text="Timeline, measures and findings." />
+        <DebriefPage />
       </RequireAuth>
     ),
   },

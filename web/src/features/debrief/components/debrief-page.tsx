@@ -1,0 +1,124 @@
+import { Alert, Box, Card, CardContent, Chip, Stack, Typography } from '@mui/material';
+import { useMemo, useState } from 'react';
+import { useParams } from 'react-router-dom';
+import { ClinicalCaution } from '../../../components/ui/clinical-caution';
+import { ErrorState, Loading, PageHeader } from '../../../components/ui/states';
+import { useAuth } from '../../auth/use-auth';
+import { useDebrief } from '../api/get-debrief';
+import { ClosingPanel } from './closing-panel';
+import { ExportActions } from './export-actions';
+import { FindingsList } from './findings-list';
+import { ImportSlot } from './import-slot';
+import { LeadNotes } from './lead-notes';
+import { MeasureCards } from './measure-cards';
+import { TimelineChart } from './timeline-chart';
+import { type Band, timelineModel, viewAround } from './timeline-model';
+
+function Section({ title, children }: { title: string; children: React.ReactNode }) {
+  return (
+    <Card variant="outlined">
+      <CardContent>
+        <Typography variant="h2" sx={{ fontSize: '1.25rem', mb: 1.5 }}>
+          {title}
+        </Typography>
+        {children}
+      </CardContent>
+    </Card>
+  );
+}
+
+/** Debrief: timeline, measures, findings, notes, closing details and signature, exports. */
+export function DebriefPage() {
+  const { id = '' } = useParams();
+  const { hasRole } = useAuth();
+  const query = useDebrief(id);
+  const [selected, setSelected] = useState<number | null>(null);
+  const [view, setView] = useState<Band | null>(null);
+  const model = useMemo(() => (query.data ? timelineModel(query.data) : null), [query.data]);
+  if (query.isPending) return <Loading label="Loading the debrief…" />;
+  if (query.isError) return <ErrorState error={query.error} onRetry={() => void query.refetch()} />;
+  const d = query.data;
+  const offline = d.computedBy === 'device';
+  const lead = hasRole('lead');
+  const finding = selected === null ? null : d.findings[selected];
+  const select = (i: number) => {
+    const f = d.findings[i];
+    setSelected(i);
+    if (model) setView(viewAround(f.startSec, f.endSec, model.durationSec));
+  };
+  const title = `Debrief — ${new Date(d.record.arrestAt).toLocaleString()}`;
+  return (
+    <Stack spacing={2}>
+      <PageHeader title={title} actions={<ExportActions id={id} offline={offline} />} />
+      <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', gap: 1 }}>
+        <Chip
+          label={
+            d.record.status === 'signed'
+              ? 'Signed'
+              : d.record.status === 'closed'
+                ? 'Closed'
+                : 'Open'
+          }
+        />
+        {d.record.unitName && <Chip variant="outlined" label={d.record.unitName} />}
+        {d.record.location && <Chip variant="outlined" label={d.record.location} />}
+        <Chip
+          variant="outlined"
+          label={d.profile.version ? `${d.profile.name} v${d.profile.version}` : d.profile.name}
+        />
+      </Stack>
+      {offline && (
+        <Alert severity="info">
+          Offline: analysed on this tablet from its own store. Signing, exports and e-mail wait for
+          the network.
+        </Alert>
+      )}
+      <ClinicalCaution />
+      <Section title="Timeline">
+        {model && (
+          <TimelineChart
+            model={model}
+            view={view}
+            highlight={finding ?? null}
+            onResetView={() => {
+              setView(null);
+              setSelected(null);
+            }}
+          />
+        )}
+      </Section>
+      <Section title="Measures">
+        <MeasureCards measures={d.measures} />
+      </Section>
+      <Section title={`Findings (${d.findings.length})`}>
+        <FindingsList findings={d.findings} selected={selected} onSelect={select} />
+      </Section>
+      <Section title="Lead notes">
+        <LeadNotes
+          key={`${d.record.notesWentWell}|${d.record.notesToChange}|${d.record.status}`}
+          record={d.record}
+          canEdit={lead && !offline}
+        />
+      </Section>
+      <Section title="Closing details and signature">
+        <ClosingPanel
+          key={`${d.record.status}|${d.record.outcome}`}
+          record={d.record}
+          canSign={lead && !offline}
+        />
+        {d.amendments.length > 0 && (
+          <Box sx={{ mt: 2 }} component="section" aria-label="Amendments">
+            <Typography variant="subtitle1">Amendments</Typography>
+            {d.amendments.map((a) => (
+              <Typography key={a.id} variant="body2" sx={{ mt: 0.5 }}>
+                {new Date(a.createdAt).toLocaleString()} — {a.createdByName ?? a.createdBy}:{' '}
+                {a.reason}
+              </Typography>
+            ))}
+          </Box>
+        )}
+      </Section>
+      {hasRole('lead', 'recorder') && !offline && <ImportSlot resuscitationId={id} />}
+    </Stack>
+  );
+}

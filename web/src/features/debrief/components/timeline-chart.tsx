@@ -1,0 +1,140 @@
+import { Box, Button, Stack, Typography } from '@mui/material';
+import { clockFromArrest } from '@upstroke/contracts';
+import {
+  Chart as ChartJS,
+  type ChartData,
+  type ChartOptions,
+  Legend,
+  LinearScale,
+  LineElement,
+  PointElement,
+  Tooltip,
+} from 'chart.js';
+import annotationPlugin from 'chartjs-plugin-annotation';
+import { useEffect, useMemo, useRef } from 'react';
+import { Scatter } from 'react-chartjs-2';
+import { annotationsOf } from './timeline-annotations';
+import type { Band, TimelineModel } from './timeline-model';
+
+ChartJS.register(LinearScale, PointElement, LineElement, Tooltip, Legend, annotationPlugin);
+
+/** chartjs-plugin-zoom touches `window` when imported: load it in the browser only. */
+function useZoomPlugin(): void {
+  useEffect(() => {
+    if (typeof window === 'undefined') return;
+    void import('chartjs-plugin-zoom').then((m) => ChartJS.register(m.default));
+  }, []);
+}
+
+export interface TimelineProps {
+  model: TimelineModel;
+  view: Band | null;
+  highlight: Band | null;
+  onResetView: () => void;
+}
+
+/** EtCO2 over the code with every event, compressions, flagged intervals and rises. */
+export function TimelineChart({ model, view, highlight, onResetView }: TimelineProps) {
+  useZoomPlugin();
+  const ref = useRef<ChartJS<'scatter'>>(null);
+  const data: ChartData<'scatter'> = useMemo(
+    () => ({
+      datasets: [
+        {
+          label: 'Capnogram',
+          data: model.wave,
+          showLine: true,
+          borderColor: '#9aa5b1',
+          borderWidth: 1,
+          pointRadius: 0,
+        },
+        {
+          label: 'Per-breath EtCO2',
+          data: model.breaths,
+          showLine: true,
+          borderColor: '#0b5c8a',
+          borderWidth: 2,
+          pointRadius: 0,
+        },
+        {
+          label: 'Entered EtCO2',
+          data: model.manual,
+          backgroundColor: '#0b5c8a',
+          pointRadius: 5,
+          pointStyle: 'circle',
+        },
+        {
+          label: 'Imported EtCO2',
+          data: model.imported,
+          backgroundColor: '#7b4fa0',
+          pointRadius: 4,
+          pointStyle: 'rectRot',
+        },
+      ].filter((ds) => ds.data.length > 0),
+    }),
+    [model],
+  );
+  const yMax = Math.min(
+    100,
+    Math.max(40, ...model.breaths.map((p) => p.y), ...model.manual.map((p) => p.y)) + 8,
+  );
+  const options: ChartOptions<'scatter'> = {
+    animation: false,
+    maintainAspectRatio: false,
+    scales: {
+      x: {
+        type: 'linear',
+        min: view?.startSec ?? 0,
+        max: view?.endSec ?? model.durationSec,
+        title: { display: true, text: 'Time from arrest (min:s)' },
+        ticks: { callback: (v) => clockFromArrest(Number(v)) },
+      },
+      y: { min: 0, max: yMax, title: { display: true, text: 'EtCO2 (mmHg)' } },
+    },
+    plugins: {
+      legend: { position: 'bottom' },
+      tooltip: { callbacks: { title: (items) => clockFromArrest(items[0]?.parsed.x ?? 0) } },
+      annotation: { annotations: annotationsOf(model, highlight, yMax) },
+      zoom: {
+        pan: { enabled: true, mode: 'x' },
+        zoom: { wheel: { enabled: true }, pinch: { enabled: true }, mode: 'x' },
+        limits: { x: { min: 0, max: model.durationSec } },
+      },
+    } as ChartOptions<'scatter'>['plugins'],
+  };
+  const shown = view ?? { startSec: 0, endSec: model.durationSec };
+  return (
+    <Box>
+      <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between', mb: 1 }}>
+        <Typography aria-live="polite" data-testid="timeline-view">
+          Showing {clockFromArrest(shown.startSec)} – {clockFromArrest(shown.endSec)}
+        </Typography>
+        <Button
+          onClick={() => {
+            ref.current?.resetZoom?.();
+            onResetView();
+          }}
+          sx={{ minHeight: 48 }}
+        >
+          Show whole code
+        </Button>
+      </Stack>
+      <Box
+        sx={{ height: 380 }}
+        role="img"
+        aria-label={`EtCO2 timeline: ${model.markers.length} event markers, ${model.low.length} low-EtCO2 intervals shaded, ${model.compressions.length} compression periods, ${model.rises.length} EtCO2 rises`}
+        data-markers={model.markers.length}
+        data-low-intervals={model.low.length}
+      >
+        <Scatter ref={ref} data={data} options={options} />
+      </Box>
+      <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 1 }}>
+        {model.markers.length} event markers · {model.low.length} low-EtCO2 intervals shaded (below{' '}
+        {model.lowMmHg} mmHg) · {model.compressions.length} compression periods (green) ·{' '}
+        {model.rises.length} EtCO2 rises (dashed: after a confounder). Markers: CA arrest, S shock,
+        E epinephrine, D other drug, A airway, V ventilation, R rhythm, P pulse, ROSC, RA re-arrest,
+        IV access, N note, ▶/■ compressions on/off. Drag or pinch to pan and zoom.
+      </Typography>
+    </Box>
+  );
+}

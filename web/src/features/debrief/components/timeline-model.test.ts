@@ -1,0 +1,65 @@
+import { describe, expect, it } from 'vitest';
+import type { LocalEtco2, LocalEvent, LocalResuscitation } from '../../../lib/offline';
+import { debriefFromLocal } from '../api/offline-debrief';
+import { timelineModel, viewAround } from './timeline-model';
+
+const arrestAt = '2026-03-04T10:00:00.000Z';
+const at = (s: number) => new Date(Date.parse(arrestAt) + s * 1000).toISOString();
+const record: LocalResuscitation = {
+  id: 'r1',
+  siteId: 's1',
+  arrestAt,
+  roster: [],
+  status: 'closed',
+  local: 1,
+  createdAt: 0,
+};
+const ev = (id: string, s: number, kind: string, data: Record<string, unknown> = {}) =>
+  ({ id, resuscitationId: 'r1', at: at(s), kind, data, deviceId: 'd', synced: 0 }) as LocalEvent;
+const events = [
+  ev('a', 0, 'arrest'),
+  ev('b', 10, 'compressions-start'),
+  ev('c', 100, 'drug', { drug: 'epinephrine' }),
+  ev('x', 150, 'shock', { energyJ: 150 }),
+  ev('y', 151, 'correction', {
+    supersedes: 'x',
+    replacement: { kind: 'shock', data: { energyJ: 200 }, at: at(150) },
+  }),
+  ev('d', 200, 'compressions-stop'),
+  ev('e', 220, 'end', { reason: 'terminated' }),
+];
+// 5 mmHg during compressions: under the 10 mmHg default (AHA 2020; Sandroni 2018).
+const etco2 = [20, 40, 60, 80, 100, 120].map(
+  (s, i) =>
+    ({
+      id: `v${i}`,
+      resuscitationId: 'r1',
+      at: at(s),
+      value: 5,
+      unit: 'mmHg',
+      source: 'manual',
+      deviceId: 'd',
+      synced: 0,
+    }) as LocalEtco2,
+);
+
+describe('offline debrief and timeline model', () => {
+  it('runs capno on the tablet store and marks every live event, low interval and compression band', () => {
+    const d = debriefFromLocal({ record, events, etco2, context: null });
+    expect(d.computedBy).toBe('device');
+    expect(d.profile.thresholds.lowEtco2MmHg).toBe(10);
+    expect(d.findings.some((f) => f.kind === 'etco2-low')).toBe(true);
+    const m = timelineModel(d);
+    // The superseded shock and the correction itself are replaced by one marker for the replacement.
+    expect(m.markers.map((x) => x.code)).toEqual(['CA', '▶', 'E', 'S', '■', 'End']);
+    expect(m.markers.find((x) => x.code === 'S')?.label).toContain('200 J');
+    expect(m.compressions).toEqual([{ startSec: 10, endSec: 200 }]);
+    expect(m.low.length).toBeGreaterThan(0);
+    expect(m.manual).toHaveLength(6);
+  });
+
+  it('frames a finding with a margin, clipped to the record', () => {
+    expect(viewAround(100, 130, 220)).toEqual({ startSec: 70, endSec: 160 });
+    expect(viewAround(5, 10, 220)).toEqual({ startSec: 0, endSec: 40 });
+  });
+});

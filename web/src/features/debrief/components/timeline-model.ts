@@ -1,0 +1,116 @@
+import { clockFromArrest, type Debrief, type DebriefEvent, eventLabel } from '@upstroke/contracts';
+
+/** Our own short marker for each event kind (legend on the screen and in the PDF). */
+export const markerCodes: Record<string, string> = {
+  arrest: 'CA',
+  'compressions-start': '▶',
+  'compressions-stop': '■',
+  shock: 'S',
+  drug: 'D',
+  airway: 'A',
+  ventilation: 'V',
+  rhythm: 'R',
+  pulse: 'P',
+  rosc: 'ROSC',
+  rearrest: 'RA',
+  access: 'IV',
+  note: 'N',
+  end: 'End',
+  correction: '✎',
+};
+
+export function markerOf(e: DebriefEvent): string {
+  if (e.kind === 'drug' && e.data.drug === 'epinephrine') return 'E';
+  return markerCodes[e.kind] ?? '•';
+}
+
+export interface Marker {
+  id: string;
+  tSec: number;
+  code: string;
+  label: string;
+  amendment: boolean;
+}
+
+export interface Band {
+  startSec: number;
+  endSec: number;
+}
+
+export interface Rise {
+  tSec: number;
+  confounded: boolean;
+  label: string;
+}
+
+export interface TimelineModel {
+  durationSec: number;
+  lowMmHg: number;
+  manual: { x: number; y: number }[];
+  imported: { x: number; y: number }[];
+  breaths: { x: number; y: number }[];
+  wave: { x: number; y: number }[];
+  markers: Marker[];
+  compressions: Band[];
+  low: Band[];
+  rises: Rise[];
+}
+
+/** Events as finally recorded: superseded ones out, a correction's replacement in its place. */
+export function effectiveEvents(events: readonly DebriefEvent[]): DebriefEvent[] {
+  const out: DebriefEvent[] = [];
+  for (const e of events) {
+    if (e.supersededBy) continue;
+    if (e.kind !== 'correction') out.push(e);
+    else {
+      const r = e.data.replacement as Pick<DebriefEvent, 'kind' | 'data' | 'at'> | undefined;
+      if (r) out.push({ ...e, ...r, tSec: e.tSec + (Date.parse(r.at) - Date.parse(e.at)) / 1000 });
+    }
+  }
+  return out.sort((a, b) => a.tSec - b.tSec);
+}
+
+/** Everything the timeline draws, from the debrief (pure: tested without a canvas). */
+export function timelineModel(d: Debrief): TimelineModel {
+  const pt = (p: { tSec: number; mmHg: number }) => ({
+    x: p.tSec,
+    y: Math.round(p.mmHg * 10) / 10,
+  });
+  const live = effectiveEvents(d.events);
+  const last = Math.max(0, ...d.events.map((e) => e.tSec));
+  return {
+    durationSec: Math.max(60, d.measures.durationSec, last),
+    lowMmHg: d.profile.thresholds.lowEtco2MmHg,
+    manual: d.etco2Series.filter((p) => p.source === 'manual').map(pt),
+    imported: d.etco2Series.filter((p) => p.source === 'import').map(pt),
+    breaths: d.etco2Series.filter((p) => p.source === 'waveform' || p.source === 'stream').map(pt),
+    wave: d.waveformTrace
+      ? d.waveformTrace.tSec.map((x, i) => ({ x, y: d.waveformTrace?.mmHg[i] ?? 0 }))
+      : [],
+    markers: live.map((e) => ({
+      id: e.id,
+      tSec: e.tSec,
+      code: markerOf(e),
+      label: `${clockFromArrest(e.tSec)} ${eventLabel(e.kind, e.data)}`,
+      amendment: e.amendment,
+    })),
+    compressions: d.measures.compressionIntervals ?? [],
+    low: d.findings.filter((f) => f.kind === 'etco2-low'),
+    rises: d.findings
+      .filter((f) => f.kind === 'etco2-rise')
+      .map((f) => ({
+        tSec: f.startSec,
+        confounded: f.confounder !== null,
+        label: f.confounder ? `Rise (after ${f.confounder.replace('-', ' ')})` : 'Rise',
+      })),
+  };
+}
+
+/** The view around a finding: its interval with a margin either side. */
+export function viewAround(startSec: number, endSec: number, durationSec: number): Band {
+  const margin = Math.max(30, (endSec - startSec) * 0.5);
+  return {
+    startSec: Math.max(0, Math.floor(startSec - margin)),
+    endSec: Math.min(durationSec, Math.ceil(endSec + margin)),
+  };
+}
