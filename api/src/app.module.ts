@@ -10,6 +10,7 @@ import { AuditModule } from './modules/audit/audit.module';
 import { AuditLogModule } from './modules/audit-log/audit-log.module';
 import { AuthModule } from './modules/auth/auth.module';
 import { DebriefModule } from './modules/debrief/debrief.module';
+import { DebriefMailModule } from './modules/debrief-mail/debrief-mail.module';
 import { ExportsModule } from './modules/exports/exports.module';
 import { ExportsModule } from './modules/exports/exports.module';
 import { HealthModule } from './modules/health/health.module';
@@ -50,6 +51,7 @@ export class AppModule {
         ResuscitationsModule,
         DebriefModule,
         ExportsModule,
+        DebriefMailModule,
         ExportsModule,
         SummariesModule,
         TrendsModule,

@@ -25,6 +25,8 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'POST /api/resuscitations/{id}/amendments': ['lead'],
   'GET /api/resuscitations/{id}/report.pdf': ['lead', 'quality'],
   'GET /api/resuscitations/{id}/fhir': ['lead', 'quality'],
+  'POST /api/resuscitations/{id}/email': ['lead'],
+  'GET /api/mail/outbox': ['admin'],
   'GET /api/resuscitations/{id}/report.pdf': ['lead', 'quality'],
   'GET /api/resuscitations/{id}/fhir': ['lead', 'quality'],
   'GET /api/context': everyone,

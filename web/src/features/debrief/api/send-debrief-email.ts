@@ -4,7 +4,6 @@ import { z } from 'zod';
 import { apiFetch } from '../../../lib/api-client';
 
 export const emailResultSchema = z.object({
-  id: z.string(),
   status: z.enum(['sent', 'queued']),
 });
 

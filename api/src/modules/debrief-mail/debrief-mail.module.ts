@@ -1,0 +1,16 @@
+import { Module } from '@nestjs/common';
+import { DebriefModule } from '../debrief/debrief.module';
+import { ExportsModule } from '../exports/exports.module';
+import { DebriefMailController } from './debrief-mail.controller';
+import { DebriefMailService } from './debrief-mail.service';
+import { OutboxRepository } from './outbox.repository';
+import { OutboxRetryWorker } from './outbox-retry.worker';
+
+/** E-mailing the debrief, the admins' outbox list and the retry worker for queued mail. */
+@Module({
+  imports: [DebriefModule, ExportsModule],
+  controllers: [DebriefMailController],
+  providers: [DebriefMailService, OutboxRepository, OutboxRetryWorker],
+  exports: [OutboxRetryWorker],
+})
+export class DebriefMailModule {}

@@ -1,0 +1,75 @@
+import { Inject, Injectable } from '@nestjs/common';
+import {
+  clockFromArrest,
+  type Debrief,
+  outcomeLabels,
+  type SendDebriefEmail,
+} from '@upstroke/contracts';
+import type { AuthUser } from '../../common/auth.decorators';
+import { forbidden } from '../../common/errors';
+import { APP_CONFIG, type AppConfig } from '../../config';
+import { AuditRepository } from '../audit/audit.repository';
+import { DebriefService } from '../debrief/debrief.service';
+import { ExportsService, fileName } from '../exports/exports.service';
+import { MailService } from '../mail/mail.service';
+
+const pct = (f: number | null) => (f === null ? '—' : `${Math.round(f * 100)} %`);
+
+/** Plain-text summary: no patient reference in the message itself (it is in the PDF). */
+export function summaryText(d: Debrief, link: string, message?: string): string {
+  const r = d.record;
+  const m = d.measures;
+  const lines = [
+    message ? `${message}\n` : '',
+    `Debrief of the resuscitation on ${new Date(r.arrestAt).toUTCString()}`,
+    `${r.siteName}${r.unitName ? `, ${r.unitName}` : ''}${r.location ? `, ${r.location}` : ''}`,
+    `Status: ${r.status === 'signed' ? 'signed' : 'not signed yet (draft)'}; outcome: ${r.outcome ? outcomeLabels[r.outcome] : 'not recorded'}`,
+    '',
+    `Duration ${clockFromArrest(m.durationSec)} · compression fraction ${pct(m.compressionFraction)} · longest pause ${m.longestPauseSec === null ? '—' : `${Math.round(m.longestPauseSec)} s`}`,
+    `EtCO2 median ${m.etco2.medianMmHg === null ? '—' : `${Math.round(m.etco2.medianMmHg)} mmHg`} · CPR time ≥ 10 mmHg ${pct(m.etco2.fractionAtOrAbove10)}`,
+    `Findings: ${d.findings.length}`,
+    ...d.findings.slice(0, 10).map((f) => `- ${clockFromArrest(f.startSec)} ${f.message}`),
+    '',
+    `Open the debrief: ${link}`,
+    'The full record is attached as a PDF.',
+    '',
+    'Decision support only: follow your local resuscitation protocol and clinical judgement.',
+  ];
+  return lines.filter((l, i) => l !== '' || i > 0).join('\n');
+}
+
+/** E-mails the debrief (summary, link, PDF) through the outbox: never lost if SMTP is down. */
+@Injectable()
+export class DebriefMailService {
+  constructor(
+    private readonly debrief: DebriefService,
+    private readonly exportsService: ExportsService,
+    private readonly mail: MailService,
+    private readonly audit: AuditRepository,
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+  ) {}
+
+  async send(user: AuthUser, id: string, body: SendDebriefEmail) {
+    if (user.role !== 'lead') throw forbidden('Only the lead e-mails the debrief');
+    const d = await this.debrief.forUser(user, id);
+    const pdf = await this.exportsService.pdfOf(d);
+    const link = `${this.config.publicUrl}/debrief/${id}`;
+    const status = await this.mail.send({
+      to: body.recipients,
+      subject: `Resuscitation debrief — ${d.record.siteName}, ${d.record.arrestAt.slice(0, 10)}`,
+      text: summaryText(d, link, body.message),
+      attachments: [{ filename: fileName(d, 'pdf'), content: pdf, contentType: 'application/pdf' }],
+      resuscitationId: id,
+      createdBy: user.id,
+    });
+    await this.audit.insert({
+      userId: user.id,
+      action: 'email',
+      entity: 'resuscitation',
+      entityId: id,
+      resuscitationId: id,
+      details: { recipients: body.recipients.length, status },
+    });
+    return { status };
+  }
+}

@@ -1,0 +1,101 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { KNEX, type Db } from '../../db/knex';
+
+export interface OutboxRow {
+  id: string;
+  to: string[];
+  subject: string;
+  body: string;
+  attachmentName: string | null;
+  attachmentType: string | null;
+  attachment: Buffer | null;
+  status: 'queued' | 'sent' | 'failed';
+  attempts: number;
+  lastError: string | null;
+  nextAttemptAt: Date;
+  sentAt: Date | null;
+  createdAt: Date;
+  createdBy: string | null;
+  resuscitationId: string | null;
+}
+
+const listColumns = [
+  'id',
+  'to',
+  'subject',
+  'status',
+  'attempts',
+  'lastError',
+  'nextAttemptAt',
+  'sentAt',
+  'createdAt',
+  'createdBy',
+  'resuscitationId',
+  'attachmentName',
+];
+
+/** `mail_outbox` for the retry worker and the admins' list; no rules here. */
+@Injectable()
+export class OutboxRepository {
+  constructor(@Inject(KNEX) private readonly db: Db) {}
+
+  async list(limit: number, offset: number) {
+    const [{ count }] = await this.db('mailOutbox').count<{ count: number }[]>({ count: '*' });
+    const items = await this.db('mailOutbox')
+      .orderBy('createdAt', 'desc')
+      .limit(limit)
+      .offset(offset)
+      .select<Omit<OutboxRow, 'body' | 'attachment' | 'attachmentType'>[]>(listColumns);
+    return { items, total: Number(count) };
+  }
+
+  async findById(id: string): Promise<OutboxRow | undefined> {
+    return this.db('mailOutbox').where({ id }).first<OutboxRow>();
+  }
+
+  /**
+   * Claims due queued rows by pushing their next attempt out first (one worker per row
+   * even with several API processes: `for update skip locked`).
+   */
+  async claimDue(now: Date, limit: number, leaseMs: number): Promise<OutboxRow[]> {
+    return this.db.transaction(async (trx) => {
+      const rows = await trx('mailOutbox')
+        .where({ status: 'queued' })
+        .where('nextAttemptAt', '<=', now)
+        .orderBy('nextAttemptAt')
+        .limit(limit)
+        .forUpdate()
+        .skipLocked()
+        .select<OutboxRow[]>('*');
+      if (rows.length > 0)
+        await trx('mailOutbox')
+          .whereIn(
+            'id',
+            rows.map((r) => r.id),
+          )
+          .update({ nextAttemptAt: new Date(now.getTime() + leaseMs) });
+      return rows;
+    });
+  }
+
+  async markSent(id: string): Promise<void> {
+    await this.db('mailOutbox')
+      .where({ id })
+      .update({
+        status: 'sent',
+        sentAt: new Date(),
+        lastError: null,
+        attempts: this.db.raw('attempts + 1'),
+      });
+  }
+
+  async markFailed(id: string, error: string, next: Date | null): Promise<void> {
+    await this.db('mailOutbox')
+      .where({ id })
+      .update({
+        lastError: error.slice(0, 500),
+        attempts: this.db.raw('attempts + 1'),
+        ...(next ? { nextAttemptAt: next } : { status: 'failed' }),
+      });
+  }
+}
