@@ -21,7 +21,7 @@ async function main() {
   await renderReportPdf(debrief, opts); // warm-up: fonts read and parsed once per process
   const times: number[] = [];
   let size = 0;
-  let file = Buffer.alloc(0);
+  let file: Buffer = Buffer.alloc(0);
   for (let i = 0; i < 5; i++) {
     const s = performance.now();
     file = await renderReportPdf(debrief, opts);
