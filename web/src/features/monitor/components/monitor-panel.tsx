@@ -1,4 +1,9 @@
-import { Button, Paper, Typography } from '@mui/material';
+import { Alert, Button, Chip, Paper, Stack, Typography } from '@mui/material';
+import { ClinicalCaution } from '../../../components/ui/clinical-caution';
+import { useMonitorLink } from '../hooks/use-monitor-link';
+import { saveLinkUrl } from '../lib/link-url';
+import { CapnogramCanvas } from './capnogram-canvas';
+import { LinkSettings } from './link-settings';
 
 export interface MonitorPanelProps {
   resuscitationId: string;
@@ -6,17 +11,100 @@ export interface MonitorPanelProps {
   onEtco2?: (mmHg: number, at: string) => void;
 }
 
+const statusText = {
+  idle: 'Not connected',
+  connecting: 'Connecting…',
+  live: 'Live',
+  lost: 'Link lost — reconnecting; keep recording by hand',
+} as const;
+
 /**
- * Placeholder for the bedside monitor link (issue 5 replaces this file with the real panel:
- * WebSocket link, live capnogram). Kept so the Live layout has its place and builds.
+ * Monitor link inside Live: the live capnogram, per-breath EtCO2 and ventilation rate from
+ * capno's LiveAnalyzer, gaps and link state. The link never blocks manual entry: losing it
+ * shows here, and everything else on the screen keeps working.
  */
-export function MonitorPanel(_props: MonitorPanelProps) {
+export function MonitorPanel(props: MonitorPanelProps) {
+  const { view, ring, connect, disconnect } = useMonitorLink(props);
+  const on = view.status !== 'idle';
   return (
-    <Paper variant="outlined" sx={{ p: 1 }}>
-      <Typography variant="subtitle2">Monitor link</Typography>
-      <Button disabled sx={{ minHeight: 56 }}>
-        Connect monitor
-      </Button>
+    <Paper variant="outlined" sx={{ p: 1.5 }} aria-label="Monitor link" component="section">
+      <Stack spacing={1}>
+        <Stack
+          direction="row"
+          spacing={1}
+          sx={{ alignItems: 'center', justifyContent: 'space-between' }}
+        >
+          <Typography variant="subtitle1" component="h2">
+            Monitor link
+          </Typography>
+          <Chip
+            label={statusText[view.status]}
+            color={
+              view.status === 'live' ? 'success' : view.status === 'lost' ? 'error' : 'default'
+            }
+            role="status"
+            aria-label="Link status"
+          />
+        </Stack>
+        {view.status === 'lost' && (
+          <Alert severity="error">
+            The monitor link is lost{view.detail ? ` (${view.detail})` : ''}. It reconnects by
+            itself; enter EtCO2 by hand meanwhile.
+          </Alert>
+        )}
+        {on ? (
+          <>
+            <CapnogramCanvas ring={ring} />
+            <Stack direction="row" spacing={3} sx={{ alignItems: 'baseline' }}>
+              <Reading label="EtCO2" value={view.etco2MmHg} unit="mmHg" />
+              <Reading label="Ventilation rate" value={view.ratePerMin} unit="/min" />
+              <Typography variant="body2" color="text.secondary" aria-label="Link gaps">
+                {view.gaps === 0 ? 'No gaps' : `${view.gaps} frame(s) missed`}
+              </Typography>
+            </Stack>
+            {view.findings.map((f) => (
+              <Alert
+                key={f.kind}
+                severity={f.severity === 'info' ? 'info' : 'warning'}
+                data-finding={f.kind}
+              >
+                {f.message}
+              </Alert>
+            ))}
+            {view.findings.length > 0 && <ClinicalCaution dense />}
+            <Button
+              variant="outlined"
+              onClick={disconnect}
+              sx={{ minHeight: 56, alignSelf: 'flex-start' }}
+            >
+              Disconnect monitor
+            </Button>
+          </>
+        ) : (
+          <LinkSettings
+            onConnect={(url, remember) => {
+              if (remember) saveLinkUrl(url);
+              connect(url);
+            }}
+          />
+        )}
+      </Stack>
     </Paper>
+  );
+}
+
+function Reading({ label, value, unit }: { label: string; value: number | null; unit: string }) {
+  return (
+    <Stack>
+      <Typography variant="caption" color="text.secondary">
+        {label}
+      </Typography>
+      <Typography variant="h4" component="p" aria-label={label}>
+        {value ?? '—'}
+        <Typography component="span" variant="body2" sx={{ ml: 0.5 }}>
+          {unit}
+        </Typography>
+      </Typography>
+    </Stack>
   );
 }
