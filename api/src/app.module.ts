@@ -12,7 +12,6 @@ import { AuthModule } from './modules/auth/auth.module';
 import { DebriefModule } from './modules/debrief/debrief.module';
 import { DebriefMailModule } from './modules/debrief-mail/debrief-mail.module';
 import { ExportsModule } from './modules/exports/exports.module';
-import { ExportsModule } from './modules/exports/exports.module';
 import { HealthModule } from './modules/health/health.module';
 import { ImportsModule } from './modules/imports/imports.module';
 import { LinkModule } from './modules/link/link.module';
@@ -52,7 +51,6 @@ export class AppModule {
         DebriefModule,
         ExportsModule,
         DebriefMailModule,
-        ExportsModule,
         SummariesModule,
         TrendsModule,
         ReviewsModule,

@@ -27,8 +27,6 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'GET /api/resuscitations/{id}/fhir': ['lead', 'quality'],
   'POST /api/resuscitations/{id}/email': ['lead'],
   'GET /api/mail/outbox': ['admin'],
-  'GET /api/resuscitations/{id}/report.pdf': ['lead', 'quality'],
-  'GET /api/resuscitations/{id}/fhir': ['lead', 'quality'],
   'GET /api/context': everyone,
   'POST /api/auth/set-password': 'public',
   'GET /api/users': admin,
