@@ -61,7 +61,9 @@ export function DebriefPage() {
           }
         />
         {d.record.unitName && <Chip variant="outlined" label={d.record.unitName} />}
-        {d.record.location && <Chip variant="outlined" label={d.record.location} />}
+        {d.record.location && d.record.location !== d.record.unitName && (
+          <Chip variant="outlined" label={d.record.location} />
+        )}
         <Chip
           variant="outlined"
           label={d.profile.version ? `${d.profile.name} v${d.profile.version}` : d.profile.name}

@@ -58,8 +58,9 @@ export function annotationsOf(
       label: {
         display: true,
         content: e.code,
-        position: 'start',
-        yAdjust: -(i % 3) * 18,
+        // Labels along the top, in three rows so that close events stay readable.
+        position: 'end',
+        yAdjust: (i % 3) * 20,
         backgroundColor: e.code === 'S' ? '#b7791f' : e.code === 'ROSC' ? '#2e7d32' : '#455a64',
         font: { size: 11 },
         padding: 3,

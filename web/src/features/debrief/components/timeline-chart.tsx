@@ -26,6 +26,11 @@ function useZoomPlugin(): void {
   }, []);
 }
 
+/** Tick spacing in whole minutes (or 10/30 s when zoomed in): about ten ticks. */
+function niceStep(spanSec: number): number {
+  return [10, 30, 60, 120, 300, 600, 900, 1800, 3600].find((s) => spanSec / s <= 12) ?? 7200;
+}
+
 export interface TimelineProps {
   model: TimelineModel;
   view: Band | null;
@@ -78,6 +83,7 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
     100,
     Math.max(40, ...model.breaths.map((p) => p.y), ...model.manual.map((p) => p.y)) + 8,
   );
+  const shownSpan = (view?.endSec ?? model.durationSec) - (view?.startSec ?? 0);
   const options: ChartOptions<'scatter'> = {
     animation: false,
     maintainAspectRatio: false,
@@ -87,7 +93,7 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
         min: view?.startSec ?? 0,
         max: view?.endSec ?? model.durationSec,
         title: { display: true, text: 'Time from arrest (min:s)' },
-        ticks: { callback: (v) => clockFromArrest(Number(v)) },
+        ticks: { stepSize: niceStep(shownSpan), callback: (v) => clockFromArrest(Number(v)) },
       },
       y: { min: 0, max: yMax, title: { display: true, text: 'EtCO2 (mmHg)' } },
     },

@@ -77,7 +77,10 @@ export function timelineModel(d: Debrief): TimelineModel {
     y: Math.round(p.mmHg * 10) / 10,
   });
   const live = effectiveEvents(d.events);
-  const last = Math.max(0, ...d.events.map((e) => e.tSec));
+  // With an `end` event the code's length is known; later entries (amendment notes) are
+  // still listed but do not stretch the axis.
+  const ended = d.events.some((e) => e.kind === 'end' && !e.supersededBy);
+  const last = ended ? 0 : Math.max(0, ...d.events.map((e) => e.tSec));
   return {
     durationSec: Math.max(60, d.measures.durationSec, last),
     lowMmHg: d.profile.thresholds.lowEtco2MmHg,
@@ -87,13 +90,15 @@ export function timelineModel(d: Debrief): TimelineModel {
     wave: d.waveformTrace
       ? d.waveformTrace.tSec.map((x, i) => ({ x, y: d.waveformTrace?.mmHg[i] ?? 0 }))
       : [],
-    markers: live.map((e) => ({
-      id: e.id,
-      tSec: e.tSec,
-      code: markerOf(e),
-      label: `${clockFromArrest(e.tSec)} ${eventLabel(e.kind, e.data)}`,
-      amendment: e.amendment,
-    })),
+    markers: live
+      .filter((e) => e.tSec <= Math.max(60, d.measures.durationSec, last))
+      .map((e) => ({
+        id: e.id,
+        tSec: e.tSec,
+        code: markerOf(e),
+        label: `${clockFromArrest(e.tSec)} ${eventLabel(e.kind, e.data)}`,
+        amendment: e.amendment,
+      })),
     compressions: d.measures.compressionIntervals ?? [],
     low: d.findings.filter((f) => f.kind === 'etco2-low'),
     rises: d.findings
