@@ -72,6 +72,7 @@ export async function recordEvent<K extends EventKind>(
   data: EventData<K>,
   options: { at?: string; db?: OfflineDb } = {},
 ): Promise<LocalEvent> {
+  const tappedAt = performance.now();
   const event: LocalEvent = {
     id: crypto.randomUUID(),
     resuscitationId,
@@ -81,7 +82,10 @@ export async function recordEvent<K extends EventKind>(
     deviceId: deviceId(),
     synced: 0,
   };
+  // Outside an explicit transaction Dexie resolves once IndexedDB has committed the write.
   await (options.db ?? offlineDb).events.add(event);
+  // User Timing entry: tap-to-commit, read by bench/live.bench.ts and the browser's profiler.
+  performance.measure('upstroke:tap-commit', { start: tappedAt });
   writeSignal.emit();
   return event;
 }

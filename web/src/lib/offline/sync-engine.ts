@@ -46,7 +46,8 @@ export class SyncEngine {
   ) {
     this.o = {
       intervalMs: 5000,
-      debounceMs: 150,
+      // Long enough that a burst of taps goes in one drain, short enough to feel immediate.
+      debounceMs: 1000,
       backoff: {},
       isOnline: () => typeof navigator === 'undefined' || navigator.onLine,
       hasSession: () => authStore.get() !== null,

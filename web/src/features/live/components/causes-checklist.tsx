@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { Checkbox, FormControlLabel, FormGroup, Typography } from '@mui/material';
 import type { LocalEvent } from '../../../lib/offline';
 
@@ -14,7 +15,10 @@ export const reversibleCauses = [
 ];
 const prefix = 'Reversible cause considered: ';
 
-export function CausesChecklist(props: { events: LocalEvent[]; onNote: (text: string) => void }) {
+export const CausesChecklist = memo(function CausesChecklist(props: {
+  events: LocalEvent[];
+  onNote: (text: string) => void;
+}) {
   const ticked = new Set(
     props.events
       .filter((e) => e.kind === 'note' && String(e.data.text).startsWith(prefix))
@@ -39,4 +43,4 @@ export function CausesChecklist(props: { events: LocalEvent[]; onNote: (text: st
       ))}
     </FormGroup>
   );
-}
+});

@@ -9,13 +9,14 @@ import {
   Tooltip,
 } from 'chart.js';
 import annotationPlugin from 'chartjs-plugin-annotation';
+import { memo } from 'react';
 import { Line } from 'react-chartjs-2';
 import type { LocalEtco2 } from '../../../lib/offline';
 
 ChartJS.register(LinearScale, CategoryScale, PointElement, LineElement, Tooltip, annotationPlugin);
 
 /** A small trend of recorded EtCO2 over the code, with the site's low band shaded. */
-export function Etco2Trend(props: {
+export const Etco2Trend = memo(function Etco2Trend(props: {
   arrestAt: string;
   values: LocalEtco2[];
   lowMmHg: number;
@@ -68,4 +69,4 @@ export function Etco2Trend(props: {
       </Box>
     </Box>
   );
-}
+});

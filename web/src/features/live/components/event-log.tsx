@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { List, ListItem, ListItemText, Paper, Typography } from '@mui/material';
 import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
 import { formatDuration } from '../../../lib/format';
@@ -19,7 +20,14 @@ function describe(e: LocalEvent): string {
 }
 
 /** What this tablet has recorded, newest first, with a mark for values not yet on the server. */
-export function EventLog(props: { arrestAt: string; events: LocalEvent[]; etco2: LocalEtco2[] }) {
+/** Rows drawn at once: enough to check the latest taps, cheap to redraw during a long code. */
+const SHOWN = 40;
+
+export const EventLog = memo(function EventLog(props: {
+  arrestAt: string;
+  events: LocalEvent[];
+  etco2: LocalEtco2[];
+}) {
   const t0 = Date.parse(props.arrestAt);
   const rows = [
     ...props.events.map((e) => ({ id: e.id, at: e.at, text: describe(e), synced: e.synced })),
@@ -29,7 +37,9 @@ export function EventLog(props: { arrestAt: string; events: LocalEvent[]; etco2:
       text: `EtCO2 ${v.value} ${v.unit}`,
       synced: v.synced,
     })),
-  ].sort((a, b) => b.at.localeCompare(a.at));
+  ]
+    .sort((a, b) => b.at.localeCompare(a.at))
+    .slice(0, SHOWN);
   return (
     <Paper variant="outlined" sx={{ p: 1 }}>
       <Typography variant="subtitle2" component="h2">
@@ -49,4 +59,4 @@ export function EventLog(props: { arrestAt: string; events: LocalEvent[]; etco2:
       </List>
     </Paper>
   );
-}
+});

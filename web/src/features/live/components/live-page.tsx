@@ -1,5 +1,5 @@
 import { Box, Stack } from '@mui/material';
-import { useMemo, useState } from 'react';
+import { useDeferredValue, useMemo, useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 import { ErrorState, Loading } from '../../../components/ui/states';
@@ -44,7 +44,19 @@ function LiveScreen({
   const { thresholds, etco2Unit } = useSiteSettings(record.siteId);
   const state = useMemo(() => liveState(events), [events]);
   const actions = useLiveActions(record.id, state, etco2Unit);
-  const prompts = usePrompts({ arrestAt: record.arrestAt, events, etco2, thresholds, state, now });
+  // The log, checklist and analysis redraw at low priority, so a tap's write is never kept
+  // waiting behind them (tap-to-commit budget: 16 ms).
+  const laterEvents = useDeferredValue(events);
+  const laterEtco2 = useDeferredValue(etco2);
+  const laterState = useMemo(() => liveState(laterEvents), [laterEvents]);
+  const prompts = usePrompts({
+    arrestAt: record.arrestAt,
+    events: laterEvents,
+    etco2: laterEtco2,
+    thresholds,
+    state: laterState,
+    now,
+  });
   const [dialog, setDialog] = useState<DialogName | 'details' | 'team' | null>(null);
   const childWeight = record.ageGroup !== 'adult' ? record.weightKg : undefined;
   return (
@@ -89,8 +101,8 @@ function LiveScreen({
             onEtco2={(mmHg, at) => void actions.etco2At(mmHg, at)}
           />
           <Metronome />
-          <EventLog arrestAt={record.arrestAt} events={events} etco2={etco2} />
-          <CausesChecklist events={events} onNote={(text) => actions.record('note', { text })} />
+          <EventLog arrestAt={record.arrestAt} events={laterEvents} etco2={laterEtco2} />
+          <CausesChecklist events={laterEvents} onNote={actions.note} />
         </Stack>
       </Box>
       <LiveDialogs

@@ -16,8 +16,9 @@ export function useLiveActions(id: string, state: LiveState, etco2Unit: 'mmHg' |
       record('correction', { supersedes: state.undoable.id, reason: 'Undo on the Live screen' });
   };
   const etco2 = (value: number) => void recordEtco2(id, value, etco2Unit);
+  const note = useCallback((text: string) => record('note', { text }), [record]);
   /** Per-breath EtCO2 from the monitor link (already in mmHg, with its own time). */
   const etco2At = (mmHg: number, at: string) =>
     recordEtco2(id, mmHg, 'mmHg', { at, source: 'stream' });
-  return { record, toggleCompressions, undo, etco2, etco2At };
+  return { record, toggleCompressions, undo, etco2, etco2At, note };
 }

@@ -1,0 +1,157 @@
+/**
+ * Live recording benchmark (issue 4), in Chromium against the running built app:
+ *  - tap → IndexedDB commit: 500 taps on the Live screen, timed by the app's own User Timing
+ *    entry `upstroke:tap-commit` (from the tap handler to Dexie's committed write); target p95 ≤ 16 ms;
+ *  - sync: 1,000 events queued offline, then back online; time until the database holds them
+ *    all (loopback); target ≤ 2 s.
+ * Needs BENCH_BASE_URL and BENCH_DATABASE_URL (set by `npm run bench`); skips without them.
+ * Merges its figures into bench/results.json under `live`.
+ */
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { loadavg } from 'node:os';
+import { resolve } from 'node:path';
+import pg from 'pg';
+import { chromium, type Page } from 'playwright-core';
+
+const RESULTS = resolve(__dirname, 'results.json');
+const baseUrl = process.env.BENCH_BASE_URL;
+const databaseUrl = process.env.BENCH_DATABASE_URL;
+const TAPS = 500;
+const QUEUED = 1000;
+
+const percentile = (sorted: number[], p: number) =>
+  sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
+
+async function countEvents(db: pg.Client, id: string): Promise<number> {
+  const r = await db.query<{ n: string }>(
+    'select count(*) as n from resuscitation_events where resuscitation_id = $1',
+    [id],
+  );
+  return Number(r.rows[0].n);
+}
+
+// Plain JavaScript for the page (tsx would inject helpers the page lacks): queue events the
+// way the app stores them, straight into IndexedDB, as if tapped while offline.
+const queueInPage = `async ({ id, n }) => {
+  const db = await new Promise((ok, ko) => { const r = indexedDB.open('upstroke'); r.onsuccess = () => ok(r.result); r.onerror = () => ko(r.error); });
+  const tx = db.transaction('events', 'readwrite');
+  const store = tx.objectStore('events');
+  const t0 = Date.now();
+  for (let i = 0; i < n; i++) store.add({ id: crypto.randomUUID(), resuscitationId: id, at: new Date(t0 + i).toISOString(),
+    kind: 'note', data: { text: 'bench ' + i }, deviceId: 'bench', synced: 0 });
+  await new Promise((ok) => { tx.oncomplete = ok; });
+  db.close();
+}`;
+
+// The floor on this machine: 500 sequential single-row IndexedDB writes on an idle page.
+const rawWrites = `async (n) => {
+  const db = await new Promise((ok) => { const r = indexedDB.open('bench-floor', 1);
+    r.onupgradeneeded = () => r.result.createObjectStore('rows', { keyPath: 'id' }); r.onsuccess = () => ok(r.result); });
+  const out = [];
+  for (let i = 0; i < n; i++) {
+    const t = performance.now();
+    const tx = db.transaction('rows', 'readwrite');
+    tx.objectStore('rows').add({ id: crypto.randomUUID(), i });
+    await new Promise((ok) => { tx.oncomplete = ok; });
+    out.push(performance.now() - t);
+  }
+  db.close();
+  return out;
+}`;
+
+async function startCode(page: Page): Promise<string> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('Email').fill('recorder@kestrel.test');
+  await page.getByLabel('Password').fill('upstroke-demo');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('button', { name: 'Start', exact: true }).click();
+  await page.waitForURL(/\/live\/[0-9a-f-]{36}$/);
+  await page.getByRole('status', { name: 'Sync: All saved' }).waitFor();
+  return page.url().split('/').pop() as string;
+}
+
+async function main(): Promise<void> {
+  if (!baseUrl || !databaseUrl) {
+    console.log(
+      'live bench skipped: BENCH_BASE_URL and BENCH_DATABASE_URL are not set (npm run bench sets them)',
+    );
+    return;
+  }
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+    ],
+  });
+  const db = new pg.Client({ connectionString: databaseUrl });
+  await db.connect();
+  try {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await context.newPage();
+    const id = await startCode(page);
+
+    for (let i = 0; i < TAPS; i++)
+      await page.getByRole('button', { name: i % 2 ? 'Re-arrest' : 'ROSC', exact: true }).click();
+    const durations = (await page.evaluate(
+      "performance.getEntriesByName('upstroke:tap-commit').map((e) => e.duration)",
+    )) as number[];
+    const sorted = [...durations].sort((a, b) => a - b);
+    const floor = ((await page.evaluate(`(${rawWrites})(${TAPS})`)) as number[]).sort(
+      (a, b) => a - b,
+    );
+    await page.getByRole('status', { name: 'Sync: All saved' }).waitFor({ timeout: 30_000 });
+    const before = await countEvents(db, id);
+
+    await context.setOffline(true);
+    await page.getByRole('status', { name: /^Sync: Offline/ }).waitFor();
+    await page.evaluate(`(${queueInPage})(${JSON.stringify({ id, n: QUEUED })})`);
+    const t0 = performance.now();
+    await context.setOffline(false);
+    while ((await countEvents(db, id)) < before + QUEUED && performance.now() - t0 < 30_000)
+      await new Promise((r) => setTimeout(r, 10));
+    const syncMs = performance.now() - t0;
+    await page.getByRole('status', { name: 'Sync: All saved' }).waitFor({ timeout: 30_000 });
+    const allSavedMs = performance.now() - t0;
+    const stored = (await countEvents(db, id)) - before;
+
+    const live = {
+      measuredAt: new Date().toISOString(),
+      chromium: browser.version(),
+      tapToCommit: {
+        taps: durations.length,
+        p50Ms: Number(percentile(sorted, 50).toFixed(2)),
+        p95Ms: Number(percentile(sorted, 95).toFixed(2)),
+        maxMs: Number(sorted.at(-1)?.toFixed(2)),
+        targetP95Ms: 16,
+        bareIndexedDbWriteP95Ms: Number(percentile(floor, 95).toFixed(2)),
+        loadAverage1m: Number(loadavg()[0].toFixed(2)),
+      },
+      sync1000: {
+        events: QUEUED,
+        stored,
+        toDatabaseMs: Math.round(syncMs),
+        toAllSavedMs: Math.round(allSavedMs),
+        targetMs: 2000,
+      },
+    };
+    const all = existsSync(RESULTS)
+      ? (JSON.parse(readFileSync(RESULTS, 'utf8')) as Record<string, unknown>)
+      : {};
+    all.live = live;
+    writeFileSync(RESULTS, `${JSON.stringify(all, null, 2)}\n`);
+    console.log(JSON.stringify(live, null, 2));
+    await context.close();
+  } finally {
+    await db.end();
+    await browser.close();
+  }
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});
