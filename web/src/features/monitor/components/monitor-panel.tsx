@@ -27,7 +27,14 @@ export function MonitorPanel(props: MonitorPanelProps) {
   const { view, ring, connect, disconnect } = useMonitorLink(props);
   const on = view.status !== 'idle';
   return (
-    <Paper variant="outlined" sx={{ p: 1.5 }} aria-label="Monitor link" component="section">
+    <Paper
+      variant="outlined"
+      sx={{ p: 1.5 }}
+      aria-label="Monitor link"
+      component="section"
+      data-samples={view.samples}
+      data-sec={view.dataSec}
+    >
       <Stack spacing={1}>
         <Stack
           direction="row"

@@ -12,6 +12,8 @@ export interface MonitorView {
   ratePerMin: number | null;
   gaps: number;
   samples: number;
+  /** Seconds from the arrest of the newest sample. */
+  dataSec: number;
   findings: Finding[];
 }
 
@@ -22,6 +24,7 @@ const idle: MonitorView = {
   ratePerMin: null,
   gaps: 0,
   samples: 0,
+  dataSec: 0,
   findings: [],
 };
 /** Findings the panel shows while they last (the waveform's own signs). */
@@ -51,6 +54,8 @@ export function useMonitorLink(o: {
   const latest = useRef(o);
   latest.current = o;
   const counters = useRef({ gaps: 0, samples: 0 });
+  /** End of the newest sample kept, across connections: a replay is never stored twice. */
+  const endMs = useRef(-Infinity);
 
   const publish = useCallback(() => {
     const s = session.current;
@@ -63,13 +68,13 @@ export function useMonitorLink(o: {
       ratePerMin: breaths.length > 2 ? roundRate(ventilationRate(breaths.slice(-8), 30)) : null,
       gaps: counters.current.gaps,
       samples: counters.current.samples,
+      dataSec: Math.round(s?.lastSec ?? 0),
       findings: a && s ? a.activeFindings(s.lastSec).filter((f) => panelKinds.has(f.kind)) : [],
     }));
   }, []);
 
   const connect = useCallback((url: string) => {
     session.current?.client.disconnect();
-    counters.current = { gaps: 0, samples: 0 };
     const store = new ChunkAccumulator((c) => {
       void queueWaveformChunk({ ...c, resuscitationId: latest.current.resuscitationId });
     });
@@ -112,6 +117,7 @@ export function useMonitorLink(o: {
     s.store.push(t0Ms, values, h.sampleRateHz, h.unit);
     counters.current.samples += values.length;
     s.lastSec = t0Sec + values.length / h.sampleRateHz;
+    endMs.current = t0Ms + (values.length * 1000) / h.sampleRateHz;
     for (const b of a.pushSamples(t0Sec, values)) {
       const at = new Date(Date.parse(latest.current.arrestAt) + b.tSec * 1000).toISOString();
       latest.current.onEtco2?.(Math.round(b.etco2MmHg * 10) / 10, at);

@@ -17,6 +17,8 @@ export interface LinkClientOptions {
   /** No frame for this long counts as a lost link (a silent cable, a sleeping bridge). */
   silenceMs?: number;
   delay?: (failures: number) => number;
+  /** Samples before this time (ms) are already held: a new client after a reconnect. */
+  notBeforeMs?: number;
 }
 
 /**
@@ -33,13 +35,15 @@ export class MonitorLinkClient {
   private hello: LinkHello | null = null;
   private nextSeq = 0;
   /** End (ms) of the last sample handed on, across reconnects. */
-  private endMs = -Infinity;
+  private endMs: number;
 
   constructor(
     private readonly url: string,
     private readonly on: LinkHandlers,
     private readonly o: LinkClientOptions = {},
-  ) {}
+  ) {
+    this.endMs = o.notBeforeMs ?? -Infinity;
+  }
 
   connect(): void {
     this.wanted = true;
