@@ -102,7 +102,7 @@ function LiveScreen({
           />
           <Metronome />
           <EventLog arrestAt={record.arrestAt} events={laterEvents} etco2={laterEtco2} />
-          <CausesChecklist events={laterEvents} onNote={actions.note} />
+          <CausesChecklist events={events} onNote={actions.note} />
         </Stack>
       </Box>
       <LiveDialogs
