@@ -1,4 +1,5 @@
-import { type Browser, chromium, type Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
+import { launchBrowser } from './browser';
 import pg from 'pg';
 import { baseUrl, databaseUrl, demoPassword } from './env';
 
@@ -93,22 +94,5 @@ export async function apiToken(role: string): Promise<string> {
   return ((await res.json()) as { accessToken: string }).accessToken;
 }
 
-/**
- * Chromium for this journey. (The shared `launchBrowser()` passes `--user-data-dir`, which
- * playwright-core 1.65 refuses; `launch()` already gives every run a fresh temporary profile.)
- */
-export async function launchChromium(): Promise<{ browser: Browser; close: () => Promise<void> }> {
-  const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
-  return { browser, close: () => browser.close() };
-}
+/** Chromium for this journey: the shared launcher. */
+export const launchChromium = launchBrowser;

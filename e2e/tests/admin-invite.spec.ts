@@ -1,27 +1,7 @@
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
-import { type Browser, chromium, type Page } from 'playwright-core';
-import { newTabletContext, signIn } from '../support/browser';
-
-/**
- * Headless Chromium as in support/browser.ts, but without `--user-data-dir`: playwright-core
- * 1.65 refuses that flag in `launch()` (it makes a fresh profile by itself).
- */
-async function launchBrowser(): Promise<{ browser: Browser; close: () => Promise<void> }> {
-  const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
-  return { browser, close: () => browser.close() };
-}
+import type { Browser, Page } from 'playwright-core';
+import { launchBrowser, newTabletContext, signIn } from '../support/browser';
 
 /** The path and query of a set-password link (the mail names the server's public address). */
 function localPath(href: string): string {
