@@ -85,26 +85,31 @@ export function useMonitorLink(o: {
       store,
       lastSec: 0,
     };
-    s.client = new MonitorLinkClient(url, {
-      status: (status, detail) => {
-        if (status !== 'live') store.flush();
-        setView((v) => ({ ...v, status, detail: detail ?? null }));
+    s.client = new MonitorLinkClient(
+      url,
+      {
+        status: (status, detail) => {
+          if (status !== 'live') store.flush();
+          setView((v) => ({ ...v, status, detail: detail ?? null }));
+        },
+        hello: (h) => {
+          const same =
+            s.hello && s.hello.sampleRateHz === h.sampleRateHz && s.hello.unit === h.unit;
+          if (!same) {
+            s.analyzer = new LiveAnalyzer({
+              arrestAt: latest.current.arrestAt,
+              sampleRateHz: h.sampleRateHz,
+              unit: h.unit,
+            });
+            ring.current = new DisplayRing(h.sampleRateHz);
+          }
+          s.hello = h;
+        },
+        samples: (t0Ms, values) => receive(s, t0Ms, values),
+        gap: (n) => (counters.current.gaps += n),
       },
-      hello: (h) => {
-        const same = s.hello && s.hello.sampleRateHz === h.sampleRateHz && s.hello.unit === h.unit;
-        if (!same) {
-          s.analyzer = new LiveAnalyzer({
-            arrestAt: latest.current.arrestAt,
-            sampleRateHz: h.sampleRateHz,
-            unit: h.unit,
-          });
-          ring.current = new DisplayRing(h.sampleRateHz);
-        }
-        s.hello = h;
-      },
-      samples: (t0Ms, values) => receive(s, t0Ms, values),
-      gap: (n) => (counters.current.gaps += n),
-    });
+      { notBeforeMs: endMs.current },
+    );
     session.current = s;
     s.client.connect();
   }, []);
