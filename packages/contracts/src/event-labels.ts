@@ -159,3 +159,22 @@ export const measureDefinitions = {
   etco2Above20:
     'Share of compression time with EtCO2 at or above 20 mmHg (target used by Meaney 2013).',
 } as const;
+
+/**
+ * Our own short marker for each event kind on a timeline (screen and PDF; each shows a
+ * legend). Plain letters, so that every font can draw them.
+ */
+export const eventMarkerCodes: Record<string, string> = {
+  arrest: 'CA',
+  shock: 'S',
+  drug: 'D',
+  airway: 'A',
+  ventilation: 'V',
+  rhythm: 'R',
+  pulse: 'P',
+  rosc: 'ROSC',
+  rearrest: 'RA',
+  access: 'IV',
+  note: 'N',
+  end: 'End',
+};

@@ -1,27 +1,12 @@
-import type { Debrief, DebriefEvent } from '@upstroke/contracts';
+import { type Debrief, type DebriefEvent, eventMarkerCodes } from '@upstroke/contracts';
 import { colors, type Layout } from './layout';
 
-/** Short marker codes for events on the timeline (our own; the legend explains them). */
-export const markerCodes: Record<string, string> = {
-  arrest: 'CA',
-  shock: 'S',
-  drug: 'D',
-  airway: 'A',
-  ventilation: 'V',
-  rhythm: 'R',
-  pulse: 'P',
-  rosc: 'ROSC',
-  rearrest: 'RA',
-  access: 'IV',
-  note: 'N',
-  end: 'End',
-};
 const legend =
   'CA arrest · S shock · D drug (E = epinephrine) · A airway · V ventilation · R rhythm · P pulse · ROSC · RA re-arrest · IV access · ticks: notes';
 
 function code(e: DebriefEvent): string {
   if (e.kind === 'drug' && e.data.drug === 'epinephrine') return 'E';
-  return markerCodes[e.kind] ?? '';
+  return eventMarkerCodes[e.kind] ?? '';
 }
 
 function tickStep(durationSec: number): number {

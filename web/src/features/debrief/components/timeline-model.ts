@@ -1,21 +1,16 @@
-import { clockFromArrest, type Debrief, type DebriefEvent, eventLabel } from '@upstroke/contracts';
+import {
+  clockFromArrest,
+  type Debrief,
+  type DebriefEvent,
+  eventLabel,
+  eventMarkerCodes,
+} from '@upstroke/contracts';
 
-/** Our own short marker for each event kind (legend on the screen and in the PDF). */
+/** Timeline markers: the shared codes plus symbols that only the screen's fonts draw. */
 export const markerCodes: Record<string, string> = {
-  arrest: 'CA',
+  ...eventMarkerCodes,
   'compressions-start': '▶',
   'compressions-stop': '■',
-  shock: 'S',
-  drug: 'D',
-  airway: 'A',
-  ventilation: 'V',
-  rhythm: 'R',
-  pulse: 'P',
-  rosc: 'ROSC',
-  rearrest: 'RA',
-  access: 'IV',
-  note: 'N',
-  end: 'End',
   correction: '✎',
 };
 
