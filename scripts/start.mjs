@@ -7,6 +7,7 @@ import { buildAll, migrateAndSeed } from './lib/build.mjs';
 import { ensureDependencies } from './lib/deps.mjs';
 import { ensureDatabase, startCluster } from './lib/postgres.mjs';
 import { log } from './lib/run.mjs';
+import { waitForHttp } from './lib/wait.mjs';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const port = Number(process.env.PORT ?? 8080);
@@ -59,10 +60,13 @@ function main() {
     log(`the API stopped (exit ${code ?? 'signal'})`);
     stopAll(code ?? 0);
   });
-  log(`Upstroke is starting on http://localhost:${port}  (mail sink on 127.0.0.1:${smtpPort})`);
-  log('demo accounts, password "upstroke-demo" (demo only: change it in real use):');
-  for (const role of ['recorder', 'lead', 'quality', 'admin']) log(`  ${role}@kestrel.test`);
-  log('Ctrl-C stops the app and PostgreSQL.');
+  void waitForHttp(`http://127.0.0.1:${port}/api/health`, 60_000, api).then((up) => {
+    if (!up) return;
+    log(`Upstroke is ready on http://localhost:${port}  (mail sink on 127.0.0.1:${smtpPort})`);
+    log('demo accounts, password "upstroke-demo" (demo only: change it in real use):');
+    for (const role of ['recorder', 'lead', 'quality', 'admin']) log(`  ${role}@kestrel.test`);
+    log('Ctrl-C stops the app and PostgreSQL.');
+  });
 }
 
 process.on('SIGINT', () => stopAll(0));

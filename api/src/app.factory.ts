@@ -50,6 +50,8 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
           'img-src': ["'self'", 'data:', 'blob:'],
           'style-src': ["'self'", "'unsafe-inline'"],
           'worker-src': ["'self'", 'blob:'],
+          // Ward tablets may reach a local server over plain HTTP: never rewrite to https.
+          'upgrade-insecure-requests': null,
         },
       },
     }),

@@ -39,6 +39,11 @@ export class AppModule {
             // Tokens and passwords never reach the log.
             redact: ['req.headers.authorization', 'req.body.password'],
             autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+            // One short line per request: the method, the address and the answer.
+            serializers: {
+              req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+              res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+            },
           },
         }),
         DatabaseModule,

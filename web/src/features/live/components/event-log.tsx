@@ -1,22 +1,11 @@
 import { memo } from 'react';
 import { List, ListItem, ListItemText, Paper, Typography } from '@mui/material';
+import { eventLabel } from '@upstroke/contracts';
 import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
 import { formatDuration } from '../../../lib/format';
 
 function describe(e: LocalEvent): string {
-  const d = e.data;
-  switch (e.kind) {
-    case 'shock':
-      return `Shock ${String(d.energyJ)} J`;
-    case 'drug':
-      return `${String(d.drug)} ${d.dose ?? ''} ${d.unit ?? ''} ${d.route ? String(d.route).toUpperCase() : ''}`.trim();
-    case 'note':
-      return `Note: ${String(d.text)}`;
-    case 'correction':
-      return 'Undo (correction)';
-    default:
-      return [e.kind, ...Object.values(d).map(String)].join(' ');
-  }
+  return e.kind === 'correction' ? 'Undo (correction)' : eventLabel(e.kind, e.data);
 }
 
 /** What this tablet has recorded, newest first, with a mark for values not yet on the server. */
