@@ -1,5 +1,5 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, within } from '@testing-library/react';
+import { act, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import type { MonitorImport } from '@upstroke/contracts';
 import { afterEach, describe, expect, it, vi } from 'vitest';
@@ -28,8 +28,14 @@ const imported: MonitorImport = {
   createdBy: null,
 };
 
-/** XMLHttpRequest stand-in: reports upload progress, then answers `status` with `body`. */
-function fakeXhr(status: number, body: object) {
+/** Answers the pending fake upload; until then the panel shows its progress. */
+let answerUpload: () => void = () => undefined;
+
+/**
+ * XMLHttpRequest stand-in: reports upload progress at once, then answers `status` with
+ * `body` when the test calls `answerUpload()` (no timers, so no race on a loaded machine).
+ */
+function fakeXhr(status: number, body: object, answerAtOnce = true) {
   return class {
     status = 0;
     responseText = '';
@@ -40,11 +46,12 @@ function fakeXhr(status: number, body: object) {
     setRequestHeader() {}
     send() {
       this.upload.onprogress?.({ lengthComputable: true, loaded: 50, total: 100 });
-      setTimeout(() => {
+      answerUpload = () => {
         this.status = status;
         this.responseText = JSON.stringify(body);
         this.onload?.();
-      }, 10);
+      };
+      if (answerAtOnce) setTimeout(answerUpload, 0);
     }
   };
 }
@@ -107,16 +114,17 @@ describe('ImportPanel', () => {
         siteIds: [],
       },
     } as never);
-    vi.stubGlobal('XMLHttpRequest', fakeXhr(201, imported));
+    vi.stubGlobal('XMLHttpRequest', fakeXhr(201, imported, false));
     const preview = renderPanel([imported]);
     await userEvent.upload(
       screen.getByLabelText('Monitor file'),
       new File(['x'], 'monitor.csv', { type: 'text/csv' }),
     );
-    expect(screen.getByRole('progressbar', { name: 'Upload progress' })).toHaveAttribute(
+    expect(await screen.findByRole('progressbar', { name: 'Upload progress' })).toHaveAttribute(
       'aria-valuenow',
       '50',
     );
+    act(() => answerUpload());
     expect(await screen.findByText('Imported monitor.csv.')).toBeInTheDocument();
     expect(screen.getByText(/from 3 of 3 shock marker\(s\), residual 0.3 s/)).toBeInTheDocument();
     const field = screen.getByRole('spinbutton', { name: 'Offset (s)' });
