@@ -32,32 +32,42 @@ export interface StoredWaveformChunk {
   startAt: string;
   sampleRateHz: number;
   unit: Co2Unit;
+  /** Where the chunk came from (`stream`, `import`); absent means one source. */
+  source?: string;
   values: ArrayLike<number>;
 }
 
-const storedDataSchema = analysisInputSchema.pick({ events: true, etco2: true });
-
 /**
- * Joins stored waveform chunks into the one capnogram the analysis reads. Chunks in another
- * sample rate or unit than the first are left out; a gap between chunks becomes zero CO2
- * (no signal reached the server, which the analysis may report as an absent waveform).
+ * Joins stored waveform chunks into the one capnogram the analysis reads — the single rule
+ * for the debrief and the audit summary, so both see the same signal. One source is used,
+ * the one with most samples (a monitor import and a live stream of the same minutes would
+ * overlap), at its first chunk's rate and unit. A gap between chunks is filled with zero CO2
+ * (no signal reached the server: the analysis may report an absent waveform there), and a
+ * sample that overlaps one already placed is dropped.
  */
 export function joinWaveform(chunks: readonly StoredWaveformChunk[]): Waveform | undefined {
-  const sorted = [...chunks].sort((a, b) => Date.parse(a.startAt) - Date.parse(b.startAt));
-  const first = sorted[0];
-  if (!first) return undefined;
+  const bySource = new Map<string, number>();
+  for (const c of chunks)
+    bySource.set(c.source ?? '', (bySource.get(c.source ?? '') ?? 0) + c.values.length);
+  const source = [...bySource.entries()].sort((a, b) => b[1] - a[1])[0]?.[0];
+  if (source === undefined) return undefined;
+  const ofSource = chunks.filter((c) => (c.source ?? '') === source);
+  const first = ofSource.reduce((a, c) => (Date.parse(c.startAt) < Date.parse(a.startAt) ? c : a));
+  const use = ofSource
+    .filter((c) => c.sampleRateHz === first.sampleRateHz && c.unit === first.unit)
+    .sort((a, b) => Date.parse(a.startAt) - Date.parse(b.startAt));
+  const rate = first.sampleRateHz;
   const t0 = Date.parse(first.startAt);
   const values: number[] = [];
-  for (const c of sorted) {
-    if (c.sampleRateHz !== first.sampleRateHz || c.unit !== first.unit) continue;
-    const offset = Math.round(((Date.parse(c.startAt) - t0) / 1000) * first.sampleRateHz);
+  for (const c of use) {
+    const offset = Math.round(((Date.parse(c.startAt) - t0) / 1000) * rate);
     while (values.length < offset) values.push(0);
-    // Overlap (a chunk starting before the previous one ended): the newer samples win.
-    values.length = Math.min(values.length, offset);
-    for (let i = 0; i < c.values.length; i++) values.push(c.values[i]);
+    for (let i = values.length - offset; i < c.values.length; i++) values.push(c.values[i]);
   }
-  return { startAt: first.startAt, sampleRateHz: first.sampleRateHz, unit: first.unit, values };
+  return { startAt: first.startAt, sampleRateHz: rate, unit: first.unit, values };
 }
+
+const storedDataSchema = analysisInputSchema.pick({ events: true, etco2: true });
 
 /** The analysis input of a stored record; throws a message naming the bad event or value. */
 export function storedRecordInput(record: StoredRecord): AnalysisInput {

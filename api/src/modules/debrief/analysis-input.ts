@@ -5,7 +5,7 @@ import type {
   Waveform,
   WaveformTrace,
 } from '@upstroke/contracts';
-import { arrayToMmHg } from '@upstroke/capno';
+import { arrayToMmHg, joinWaveform } from '@upstroke/capno';
 import type {
   Etco2Row,
   EventRow,
@@ -55,42 +55,17 @@ function samplesOf(chunk: WaveformChunkRow): Float32Array {
   return new Float32Array(copy.buffer, 0, chunk.sampleCount);
 }
 
-/**
- * The stored chunks as one capnogram for `analyze()`. One source is used (the one with most
- * samples: a monitor import and a live stream of the same minutes would overlap), at the
- * first chunk's rate and unit. A gap between chunks is filled with 0 mmHg — the record
- * holds no CO2 signal there — and overlapping samples are dropped.
- */
+/** The stored chunks as one capnogram for `analyze()`, by capno's one joining rule. */
 export function assembleWaveform(chunks: readonly WaveformChunkRow[]): Waveform | undefined {
-  if (chunks.length === 0) return undefined;
-  const bySource = new Map<string, number>();
-  for (const c of chunks) bySource.set(c.source, (bySource.get(c.source) ?? 0) + c.sampleCount);
-  const source = [...bySource.entries()].sort((a, b) => b[1] - a[1])[0][0];
-  const first = chunks.find((c) => c.source === source) as WaveformChunkRow;
-  const use = chunks
-    .filter(
-      (c) => c.source === source && c.sampleRateHz === first.sampleRateHz && c.unit === first.unit,
-    )
-    .sort((a, b) => a.startAt.getTime() - b.startAt.getTime());
-  const rate = first.sampleRateHz;
-  const t0 = use[0].startAt.getTime();
-  const last = use[use.length - 1];
-  const total = Math.round(((last.startAt.getTime() - t0) / 1000) * rate) + last.sampleCount;
-  const values = new Float64Array(total);
-  let filled = 0;
-  for (const c of use) {
-    const offset = Math.round(((c.startAt.getTime() - t0) / 1000) * rate);
-    const s = samplesOf(c);
-    const from = Math.max(0, filled - offset);
-    for (let i = from; i < s.length; i++) values[offset + i] = s[i];
-    filled = Math.max(filled, offset + s.length);
-  }
-  return {
-    startAt: use[0].startAt.toISOString(),
-    sampleRateHz: rate,
-    unit: first.unit,
-    values: Array.from(values.subarray(0, filled)),
-  };
+  return joinWaveform(
+    chunks.map((c) => ({
+      startAt: c.startAt.toISOString(),
+      sampleRateHz: c.sampleRateHz,
+      unit: c.unit,
+      source: c.source,
+      values: samplesOf(c),
+    })),
+  );
 }
 
 /** A capnogram reduced to at most `buckets` min/max pairs, in mmHg, for drawing. */

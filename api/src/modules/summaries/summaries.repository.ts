@@ -63,7 +63,7 @@ export class SummariesRepository {
           sampleCount: number;
           samples: Buffer;
         })[]
-      >('startAt', 'sampleRateHz', 'unit', 'sampleCount', 'samples'),
+      >('startAt', 'sampleRateHz', 'unit', 'source', 'sampleCount', 'samples'),
       this.profileFor(q, record.profileId, record.siteId),
     ]);
     const { profileId: _, ...rest } = record;
@@ -76,6 +76,7 @@ export class SummariesRepository {
         startAt: c.startAt.toISOString(),
         sampleRateHz: c.sampleRateHz,
         unit: c.unit,
+        source: c.source,
         values: decodeSamples(c.samples, c.sampleCount),
       })),
       profile,
