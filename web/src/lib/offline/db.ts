@@ -11,6 +11,18 @@ import Dexie, { type EntityTable } from 'dexie';
 /** 0 waiting for the server, 1 acknowledged, 2 refused by the server (kept, never deleted). */
 export type SyncFlag = 0 | 1 | 2;
 
+/**
+ * The server's answer for one event, value or chunk. Kept apart from the items so that the
+ * sync never writes to the stores the taps write to (a tap never waits for a sync).
+ */
+export interface SyncAck {
+  id: string;
+  resuscitationId: string;
+  state: 1 | 2;
+  /** Why the server refused it (state 2); the item stays on the tablet. */
+  reason?: string;
+}
+
 export interface LocalResuscitation {
   id: string;
   siteId: string;
@@ -34,8 +46,6 @@ export interface LocalEvent {
   kind: EventKind;
   data: Record<string, unknown>;
   deviceId: string;
-  synced: SyncFlag;
-  rejected?: string;
 }
 
 export interface LocalEtco2 {
@@ -46,8 +56,6 @@ export interface LocalEtco2 {
   unit: Co2Unit;
   source: Etco2Source;
   deviceId: string;
-  synced: SyncFlag;
-  rejected?: string;
 }
 
 /** Raw capnogram chunks written by the monitor link; drained like events. */
@@ -59,8 +67,6 @@ export interface LocalWaveformChunk {
   unit: Co2Unit;
   seq: number;
   values: number[];
-  synced: SyncFlag;
-  rejected?: string;
 }
 
 /** A record-level write (create, closing details, roster) waiting for the server, in order. */
@@ -79,12 +85,26 @@ export interface MetaRow {
   value: RecordingContext | { offsetMs: number; at: string };
 }
 
+/** An item with what the server said of it (0 while nothing has been heard). */
+export type Tracked<T> = T & { synced: SyncFlag; rejected?: string };
+
+export function withAcks<T extends { id: string }>(
+  rows: T[],
+  acks: ReadonlyMap<string, SyncAck>,
+): Tracked<T>[] {
+  return rows.map((r) => {
+    const ack = acks.get(r.id);
+    return ack ? { ...r, synced: ack.state, rejected: ack.reason } : { ...r, synced: 0 };
+  });
+}
+
 export type OfflineDb = Dexie & {
   resuscitations: EntityTable<LocalResuscitation, 'id'>;
   events: EntityTable<LocalEvent, 'id'>;
   etco2: EntityTable<LocalEtco2, 'id'>;
   waveformChunks: EntityTable<LocalWaveformChunk, 'id'>;
   outbox: EntityTable<OutboxOp, 'seq'>;
+  acks: EntityTable<SyncAck, 'id'>;
   meta: EntityTable<MetaRow, 'key'>;
 };
 
@@ -98,6 +118,43 @@ export function createOfflineDb(name = 'upstroke'): OfflineDb {
     outbox: '++seq, resuscitationId',
     meta: 'key',
   });
+  // Version 2: the server's answers move to their own store; the items are written by taps only.
+  db.version(2)
+    .stores({
+      events: 'id, [resuscitationId+at]',
+      etco2: 'id, [resuscitationId+at]',
+      waveformChunks: 'id, [resuscitationId+startAt]',
+      acks: 'id, resuscitationId, state',
+    })
+    .upgrade(async (tx) => {
+      for (const name of ['events', 'etco2', 'waveformChunks']) {
+        const acks: SyncAck[] = [];
+        await tx
+          .table(name)
+          .toCollection()
+          .modify(
+            (row: {
+              id: string;
+              resuscitationId: string;
+              synced?: SyncFlag;
+              rejected?: string;
+            }) => {
+              if (row.synced === 1)
+                acks.push({ id: row.id, resuscitationId: row.resuscitationId, state: 1 });
+              if (row.synced === 2)
+                acks.push({
+                  id: row.id,
+                  resuscitationId: row.resuscitationId,
+                  state: 2,
+                  reason: row.rejected,
+                });
+              delete row.synced;
+              delete row.rejected;
+            },
+          );
+        await tx.table('acks').bulkPut(acks);
+      }
+    });
   return db;
 }
 

@@ -1,6 +1,9 @@
 /** The offline store and its sync: every write lands in IndexedDB first, then the outbox. */
 export {
   offlineDb,
+  type SyncAck,
+  type Tracked,
+  withAcks,
   type LocalEtco2,
   type LocalEvent,
   type LocalResuscitation,
@@ -11,6 +14,7 @@ export {
   recordEtco2,
   recordEvent,
   startResuscitation,
+  tapWriter,
   updateResuscitation,
 } from './record';
 export { startSync, syncEngine } from './engine-instance';

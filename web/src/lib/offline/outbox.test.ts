@@ -2,7 +2,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { ApiRequestError } from '../api-client';
 import { createOfflineDb, type OfflineDb } from './db';
 import { FakeServer } from './fake-server';
-import { BATCH_SIZE, countWaiting, drainOutbox } from './outbox';
+import { BATCH_SIZE, countRefused, countWaiting, drainOutbox } from './outbox';
 import { recordEtco2, recordEvent, startResuscitation, updateResuscitation } from './record';
 import { SyncEngine } from './sync-engine';
 
@@ -57,13 +57,15 @@ describe('outbox drain', () => {
     // The API dies between storing the events and answering: the tablet never hears back.
     server.failures = ['after'];
     await expect(drainOutbox(db, server)).rejects.toThrow();
-    expect(await db.events.where('synced').equals(0).count()).toBe(30);
+    expect(await db.acks.count()).toBe(0);
+    expect(await countWaiting(db)).toBe(40);
     // On retry the same ids are resent; the server counts them as duplicates.
     await drainOutbox(db, server);
     await drainOutbox(db, server);
     expect([server.stored.events.size, server.stored.etco2.size]).toEqual([30, 10]);
-    expect(await db.events.where('synced').equals(1).count()).toBe(30);
+    expect(await db.acks.where('state').equals(1).count()).toBe(40);
     expect(await db.events.count()).toBe(30);
+    expect(await countWaiting(db)).toBe(0);
   });
 
   it('keeps a refused value on the tablet with its reason and sends the rest', async () => {
@@ -71,8 +73,14 @@ describe('outbox drain', () => {
     const [bad] = await db.etco2.toArray();
     server.refuseIds.add(bad.id);
     expect(await drainOutbox(db, server)).toEqual({ sent: 2, refused: 1 });
-    const kept = await db.etco2.get(bad.id);
-    expect(kept).toMatchObject({ synced: 2, rejected: 'value: bad', resuscitationId: rec.id });
+    expect(await db.etco2.get(bad.id)).toMatchObject({ id: bad.id, resuscitationId: rec.id });
+    expect(await db.acks.get(bad.id)).toEqual({
+      id: bad.id,
+      resuscitationId: rec.id,
+      state: 2,
+      reason: 'value: bad',
+    });
+    expect(await countRefused(db)).toBe(1);
     expect(await countWaiting(db)).toBe(0);
   });
 
@@ -81,7 +89,8 @@ describe('outbox drain', () => {
     server.create = () => Promise.reject(new ApiRequestError(403, null));
     await drainOutbox(db, server);
     expect(server.stored.events.size).toBe(0);
-    expect(await db.events.where('synced').equals(0).count()).toBe(2);
+    expect(await db.events.count()).toBe(2);
+    expect(await db.acks.count()).toBe(0);
     expect((await db.outbox.toArray())[0]).toMatchObject({
       resuscitationId: rec.id,
       failed: 'Request failed (403)',

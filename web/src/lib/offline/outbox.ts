@@ -1,4 +1,4 @@
-import type { LocalEtco2, LocalEvent, LocalWaveformChunk, OfflineDb } from './db';
+import type { LocalEtco2, LocalEvent, LocalWaveformChunk, OfflineDb, SyncAck } from './db';
 import { type BatchKind, isPermanent, type SyncTransport } from './transport';
 
 type Row = LocalEvent | LocalEtco2 | LocalWaveformChunk;
@@ -16,10 +16,18 @@ function tableOf(db: OfflineDb, kind: BatchKind) {
   return db.waveformChunks;
 }
 
-/** The item as the API takes it: local bookkeeping fields stay on the tablet. */
+/** The item as the API takes it: the record id is in the path. */
 function wire(row: Row): object {
-  const { synced: _s, rejected: _r, resuscitationId: _id, ...rest } = row;
+  const { resuscitationId: _id, ...rest } = row;
   return rest;
+}
+
+/** Items of one kind the server has not answered for. */
+async function waitingItems(db: OfflineDb, kind: BatchKind, acked: Set<string>): Promise<Row[]> {
+  const table = tableOf(db, kind) as typeof db.events;
+  const keys = (await table.toCollection().primaryKeys()).filter((k) => !acked.has(k));
+  if (keys.length === 0) return [];
+  return (await table.bulkGet(keys)).filter((r): r is LocalEvent => r !== undefined);
 }
 
 function messageOf(error: unknown): string {
@@ -56,10 +64,10 @@ async function sendItems(
   transport: SyncTransport,
   kind: BatchKind,
   blocked: Set<string>,
+  acked: Set<string>,
   clockOffsetMs: number | undefined,
 ): Promise<DrainResult> {
-  const table = tableOf(db, kind);
-  const waiting = (await table.where('synced').equals(0).toArray()) as Row[];
+  const waiting = await waitingItems(db, kind, acked);
   const result: DrainResult = { sent: 0, refused: 0 };
   const byRecord = new Map<string, Row[]>();
   for (const r of waiting) {
@@ -79,11 +87,12 @@ async function sendItems(
         if (!isPermanent(error)) throw error;
         refused = new Map(chunk.map((r) => [r.id, messageOf(error)]));
       }
-      const acked = chunk.map((r): Row => {
+      const answers = chunk.map((r): SyncAck => {
         const reason = refused.get(r.id);
-        return reason ? { ...r, synced: 2, rejected: reason } : { ...r, synced: 1 };
+        const ack = { id: r.id, resuscitationId: recordId };
+        return reason ? { ...ack, state: 2, reason } : { ...ack, state: 1 };
       });
-      await (table as typeof db.events).bulkPut(acked as LocalEvent[]);
+      await db.acks.bulkPut(answers);
       result.sent += chunk.length - refused.size;
       result.refused += refused.size;
     }
@@ -99,21 +108,35 @@ export async function drainOutbox(
 ): Promise<DrainResult> {
   const blocked = await sendOps(db, transport);
   const total: DrainResult = { sent: 0, refused: 0 };
+  const acked = new Set(await db.acks.toCollection().primaryKeys());
   for (const kind of ['events', 'etco2', 'waveform'] as const) {
-    const r = await sendItems(db, transport, kind, blocked, clockOffsetMs);
+    const r = await sendItems(db, transport, kind, blocked, acked, clockOffsetMs);
     total.sent += r.sent;
     total.refused += r.refused;
   }
   return total;
 }
 
-/** How many writes wait for the server (records, events, values, chunks). */
-export async function countWaiting(db: OfflineDb): Promise<number> {
-  const [ops, events, etco2, chunks] = await Promise.all([
-    db.outbox.filter((o) => !o.failed).count(),
-    db.events.where('synced').equals(0).count(),
-    db.etco2.where('synced').equals(0).count(),
-    db.waveformChunks.where('synced').equals(0).count(),
-  ]);
-  return ops + events + etco2 + chunks;
+/**
+ * How many writes wait for the server (records, events, values, chunks): items are never
+ * deleted and each has at most one answer, so what waits is the items less the answers.
+ */
+export function countWaiting(db: OfflineDb): Promise<number> {
+  // One read transaction for the five counts: fewer transactions for a tap's write to queue behind.
+  const tables = [db.outbox, db.events, db.etco2, db.waveformChunks, db.acks];
+  return db.transaction('r', tables, async () => {
+    const [ops, events, etco2, chunks, answered] = await Promise.all([
+      db.outbox.filter((o) => !o.failed).count(),
+      db.events.count(),
+      db.etco2.count(),
+      db.waveformChunks.count(),
+      db.acks.count(),
+    ]);
+    return ops + events + etco2 + chunks - answered;
+  });
+}
+
+/** How many items the server refused (kept on the tablet with the reason). */
+export function countRefused(db: OfflineDb): Promise<number> {
+  return db.acks.where('state').equals(2).count();
 }

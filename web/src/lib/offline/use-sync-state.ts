@@ -1,7 +1,7 @@
 import { useLiveQuery } from 'dexie-react-hooks';
 import { useSyncExternalStore } from 'react';
 import { offlineDb } from './db';
-import { countWaiting } from './outbox';
+import { countRefused, countWaiting } from './outbox';
 import { syncEngine } from './engine-instance';
 
 export interface SyncState {
@@ -17,13 +17,7 @@ export interface SyncState {
 export function useSyncState(): SyncState {
   const engine = useSyncExternalStore(syncEngine.subscribe, syncEngine.getState);
   const waiting = useLiveQuery(() => countWaiting(offlineDb), [], 0);
-  const refused = useLiveQuery(
-    async () =>
-      (await offlineDb.events.where('synced').equals(2).count()) +
-      (await offlineDb.etco2.where('synced').equals(2).count()),
-    [],
-    0,
-  );
+  const refused = useLiveQuery(() => countRefused(offlineDb), [], 0);
   const status = !engine.online ? 'offline' : waiting > 0 ? 'waiting' : 'saved';
   return {
     status,

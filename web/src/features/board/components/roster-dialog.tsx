@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
 import Delete from '@mui/icons-material/Delete';
 import {
@@ -33,7 +34,7 @@ const formSchema = z.object({
 type Form = z.infer<typeof formSchema>;
 
 /** Who is present and in which role; saved to the record (and the debrief e-mail list). */
-export function RosterDialog(props: {
+export const RosterDialog = memo(function RosterDialog(props: {
   open: boolean;
   recordId: string;
   roster: RosterMember[];
@@ -109,4 +110,4 @@ export function RosterDialog(props: {
       </DialogActions>
     </Dialog>
   );
-}
+});

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { type Debrief, debriefSchema, type RecordingContext } from '@upstroke/contracts';
 import { apiFetch, ApiRequestError } from '../../../lib/api-client';
-import { offlineDb } from '../../../lib/offline';
+import { offlineDb, withAcks } from '../../../lib/offline';
 import { debriefFromLocal } from './offline-debrief';
 
 export function getDebrief(id: string): Promise<Debrief> {
@@ -16,13 +16,20 @@ export async function getLocalDebrief(id: string): Promise<Debrief | null> {
     [id, ''],
     [id, '\uffff'],
   ] as const;
-  const [events, etco2, meta] = await Promise.all([
+  const [events, etco2, answers, meta] = await Promise.all([
     offlineDb.events.where('[resuscitationId+at]').between(range[0], range[1]).toArray(),
     offlineDb.etco2.where('[resuscitationId+at]').between(range[0], range[1]).toArray(),
+    offlineDb.acks.where('resuscitationId').equals(id).toArray(),
     offlineDb.meta.get('context'),
   ]);
   const context = (meta?.value as RecordingContext | undefined) ?? null;
-  return debriefFromLocal({ record, events, etco2, context });
+  const acks = new Map(answers.map((a) => [a.id, a]));
+  return debriefFromLocal({
+    record,
+    events: withAcks(events, acks),
+    etco2: withAcks(etco2, acks),
+    context,
+  });
 }
 
 /**

@@ -1,11 +1,11 @@
 import { analyze, etco2Series, resolveThresholds } from '@upstroke/capno';
 import type { Debrief, RecordingContext } from '@upstroke/contracts';
-import type { LocalEtco2, LocalEvent, LocalResuscitation } from '../../../lib/offline';
+import type { LocalEtco2, LocalEvent, LocalResuscitation, Tracked } from '../../../lib/offline';
 
 export interface LocalRecord {
   record: LocalResuscitation;
-  events: LocalEvent[];
-  etco2: LocalEtco2[];
+  events: Tracked<LocalEvent>[];
+  etco2: Tracked<LocalEtco2>[];
   context: RecordingContext | null;
 }
 

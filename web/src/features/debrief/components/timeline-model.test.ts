@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { LocalEtco2, LocalEvent, LocalResuscitation } from '../../../lib/offline';
+import type { LocalEtco2, LocalEvent, LocalResuscitation, Tracked } from '../../../lib/offline';
 import { debriefFromLocal } from '../api/offline-debrief';
 import { timelineModel, viewAround } from './timeline-model';
 
@@ -15,7 +15,15 @@ const record: LocalResuscitation = {
   createdAt: 0,
 };
 const ev = (id: string, s: number, kind: string, data: Record<string, unknown> = {}) =>
-  ({ id, resuscitationId: 'r1', at: at(s), kind, data, deviceId: 'd', synced: 0 }) as LocalEvent;
+  ({
+    id,
+    resuscitationId: 'r1',
+    at: at(s),
+    kind,
+    data,
+    deviceId: 'd',
+    synced: 0,
+  }) as Tracked<LocalEvent>;
 const events = [
   ev('a', 0, 'arrest'),
   ev('b', 10, 'compressions-start'),
@@ -40,7 +48,7 @@ const etco2 = [20, 40, 60, 80, 100, 120].map(
       source: 'manual',
       deviceId: 'd',
       synced: 0,
-    }) as LocalEtco2,
+    }) as Tracked<LocalEtco2>,
 );
 
 describe('offline debrief and timeline model', () => {

@@ -1,4 +1,4 @@
-import { memo } from 'react';
+import { memo, useState } from 'react';
 import { Checkbox, FormControlLabel, FormGroup, Typography } from '@mui/material';
 import type { LocalEvent } from '../../../lib/offline';
 
@@ -15,15 +15,22 @@ export const reversibleCauses = [
 ];
 const prefix = 'Reversible cause considered: ';
 
+/** The causes already ticked in this record, as one string (equal while nothing changes). */
+export function tickedCauses(events: LocalEvent[]): string {
+  return events
+    .filter((e) => e.kind === 'note' && String(e.data.text).startsWith(prefix))
+    .map((e) => String(e.data.text).slice(prefix.length))
+    .join('\n');
+}
+
 export const CausesChecklist = memo(function CausesChecklist(props: {
-  events: LocalEvent[];
+  /** From `tickedCauses`. */
+  ticked: string;
   onNote: (text: string) => void;
 }) {
-  const ticked = new Set(
-    props.events
-      .filter((e) => e.kind === 'note' && String(e.data.text).startsWith(prefix))
-      .map((e) => String(e.data.text).slice(prefix.length)),
-  );
+  // Ticked at once on tap; the recorded note confirms it a moment later (and keeps it ticked).
+  const [tapped, setTapped] = useState<ReadonlySet<string>>(new Set());
+  const ticked = new Set([...props.ticked.split('\n'), ...tapped]);
   return (
     <FormGroup aria-label="Reversible causes">
       <Typography variant="subtitle2">Reversible causes (4 Hs, 4 Ts)</Typography>
@@ -36,7 +43,10 @@ export const CausesChecklist = memo(function CausesChecklist(props: {
             <Checkbox
               checked={ticked.has(c)}
               disabled={ticked.has(c)}
-              onChange={() => props.onNote(prefix + c)}
+              onChange={() => {
+                setTapped((t) => new Set(t).add(c));
+                props.onNote(prefix + c);
+              }}
             />
           }
         />

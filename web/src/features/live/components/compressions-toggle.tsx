@@ -1,16 +1,18 @@
 import { Button, Typography } from '@mui/material';
+import { memo } from 'react';
+import { useNow } from '../hooks/use-now';
 
 /** Compressions on/off; while off it shows the hands-off seconds counting up. */
-export function CompressionsToggle(props: {
+export const CompressionsToggle = memo(function CompressionsToggle(props: {
   compressing: boolean;
   changedAt: number | null;
-  now: number;
   pauseMaxSec: number;
   onToggle: () => void;
 }) {
+  const now = useNow();
   const handsOff =
     !props.compressing && props.changedAt !== null
-      ? Math.max(0, (props.now - props.changedAt) / 1000)
+      ? Math.max(0, (now - props.changedAt) / 1000)
       : null;
   const long = handsOff !== null && handsOff > props.pauseMaxSec;
   return (
@@ -38,4 +40,4 @@ export function CompressionsToggle(props: {
       </Typography>
     </Button>
   );
-}
+});

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { EventData, EventKind, Thresholds } from '@upstroke/contracts';
 import { AirwayDialog } from './airway-dialog';
 import { ChoiceDialog } from './choice-dialog';
@@ -25,7 +26,7 @@ const endReasons = [
 ] as const;
 
 /** The quick dialogs behind the Live buttons; each records one event and closes. */
-export function LiveDialogs(props: {
+export const LiveDialogs = memo(function LiveDialogs(props: {
   open: DialogName | null;
   onClose: () => void;
   record: Record;
@@ -111,4 +112,4 @@ export function LiveDialogs(props: {
       />
     </>
   );
-}
+});

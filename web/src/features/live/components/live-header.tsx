@@ -1,10 +1,11 @@
+import { memo } from 'react';
 import VolumeOff from '@mui/icons-material/VolumeOff';
 import VolumeUp from '@mui/icons-material/VolumeUp';
 import { Button, IconButton, Stack, Typography } from '@mui/material';
 import { Link } from 'react-router-dom';
 import { useMuted } from '../lib/audio';
 
-export function LiveHeader(props: {
+export const LiveHeader = memo(function LiveHeader(props: {
   title: string;
   ended: boolean;
   recordId: string;
@@ -43,4 +44,4 @@ export function LiveHeader(props: {
       )}
     </Stack>
   );
-}
+});

@@ -1,11 +1,11 @@
 import { Box, IconButton, Slider, Stack, Typography } from '@mui/material';
 import PlayArrow from '@mui/icons-material/PlayArrow';
 import Stop from '@mui/icons-material/Stop';
-import { useEffect, useState } from 'react';
+import { memo, useEffect, useState } from 'react';
 import { beep } from '../lib/audio';
 
 /** Compression-rate metronome, 100–120/min (guideline range), default 110; sound follows Mute. */
-export function Metronome() {
+export const Metronome = memo(function Metronome() {
   const [rate, setRate] = useState(110);
   const [on, setOn] = useState(false);
   const [tick, setTick] = useState(false);
@@ -51,4 +51,4 @@ export function Metronome() {
       />
     </Stack>
   );
-}
+});

@@ -1,7 +1,8 @@
 import { Box, Paper, Typography } from '@mui/material';
 import type { Thresholds } from '@upstroke/contracts';
-import { useEffect, useRef } from 'react';
+import { memo, useEffect, useRef } from 'react';
 import { formatDuration } from '../../../lib/format';
+import { useNow } from '../hooks/use-now';
 import { beep } from '../lib/audio';
 import type { LiveState } from '../lib/live-state';
 
@@ -36,13 +37,13 @@ function Timer({ label, value, alert }: { label: string; value: string; alert?: 
 }
 
 /** Elapsed since arrest, countdown to the rhythm check (with a sound cue), epinephrine timer. */
-export function TimersBar(props: {
+export const TimersBar = memo(function TimersBar(props: {
   arrestAt: string;
   state: LiveState;
   thresholds: Thresholds;
-  now: number;
 }) {
-  const { state, thresholds: t, now } = props;
+  const now = useNow();
+  const { state, thresholds: t } = props;
   const elapsed = (now - Date.parse(props.arrestAt)) / 1000;
   const cycleFrom = state.lastRhythmCheckAt ?? Date.parse(props.arrestAt);
   const toCheck = t.rhythmCheckIntervalSec - (now - cycleFrom) / 1000;
@@ -66,4 +67,4 @@ export function TimersBar(props: {
       />
     </Box>
   );
-}
+});

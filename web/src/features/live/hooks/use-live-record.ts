@@ -6,9 +6,9 @@ import {
   thresholdDefaults,
 } from '@upstroke/contracts';
 import { useLiveQuery } from 'dexie-react-hooks';
-import { useEffect } from 'react';
+import { useEffect, useMemo } from 'react';
 import { apiFetch } from '../../../lib/api-client';
-import { offlineDb } from '../../../lib/offline';
+import { offlineDb, type SyncAck } from '../../../lib/offline';
 
 /**
  * The record, its events and EtCO2 values as this tablet holds them (IndexedDB first). A
@@ -27,6 +27,13 @@ export function useLiveRecord(id: string) {
     [id],
     [],
   );
+  // The server's answers, for the "waiting" and "refused" marks (kept apart from the taps).
+  const answers = useLiveQuery(
+    () => offlineDb.acks.where('resuscitationId').equals(id).toArray(),
+    [id],
+    [],
+  );
+  const acks = useMemo(() => new Map<string, SyncAck>(answers.map((a) => [a.id, a])), [answers]);
   const remote = useQuery({
     queryKey: ['resuscitations', id, 'summary'],
     queryFn: () => apiFetch(`/resuscitations/${id}`, { schema: resuscitationSchema }),
@@ -35,7 +42,7 @@ export function useLiveRecord(id: string) {
   useEffect(() => {
     if (record === undefined && remote.data) void adopt(remote.data);
   }, [record, remote.data]);
-  return { record, events, etco2, loadError: record === undefined ? remote.error : null };
+  return { record, events, etco2, acks, loadError: record === undefined ? remote.error : null };
 }
 
 async function adopt(r: Resuscitation): Promise<void> {

@@ -6,7 +6,7 @@ let n = 0;
 function ev(kind: LocalEvent['kind'], sec: number, data: Record<string, unknown> = {}): LocalEvent {
   n += 1;
   const at = new Date(Date.UTC(2026, 2, 4, 10, 0, sec)).toISOString();
-  return { id: `e${n}`, resuscitationId: 'r', at, kind, data, deviceId: 'd', synced: 0 };
+  return { id: `e${n}`, resuscitationId: 'r', at, kind, data, deviceId: 'd' };
 }
 
 describe('liveState', () => {

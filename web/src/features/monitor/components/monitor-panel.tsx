@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { Alert, Button, Chip, Paper, Stack, Typography } from '@mui/material';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 import { useMonitorLink } from '../hooks/use-monitor-link';
@@ -23,7 +24,7 @@ const statusText = {
  * capno's LiveAnalyzer, gaps and link state. The link never blocks manual entry: losing it
  * shows here, and everything else on the screen keeps working.
  */
-export function MonitorPanel(props: MonitorPanelProps) {
+export const MonitorPanel = memo(function MonitorPanel(props: MonitorPanelProps) {
   const { view, ring, connect, disconnect } = useMonitorLink(props);
   const on = view.status !== 'idle';
   return (
@@ -98,7 +99,7 @@ export function MonitorPanel(props: MonitorPanelProps) {
       </Stack>
     </Paper>
   );
-}
+});
 
 function Reading({ label, value, unit }: { label: string; value: number | null; unit: string }) {
   return (

@@ -1,0 +1,32 @@
+/// <reference lib="webworker" />
+/**
+ * Commits taps to IndexedDB off the screen's thread, so a tap is stored in a few milliseconds
+ * even while the Live screen redraws. Dexie broadcasts each commit, so the screen's live
+ * queries see the new row as if it had been written there.
+ */
+import { createOfflineDb } from './db';
+import type { TapWrite, TapWritten } from './tap-writer';
+
+const db = createOfflineDb();
+// Open now, so the first tap does not wait for the database to open.
+void db.open();
+const scope = self as unknown as DedicatedWorkerGlobalScope;
+
+scope.onmessage = (message: MessageEvent<TapWrite>) => {
+  const { seq, table, row } = message.data;
+  const store = table === 'events' ? db.events : db.etco2;
+  store.add(row as never).then(
+    () => reply({ seq, ok: true, committedAt: performance.timeOrigin + performance.now() }),
+    (error: unknown) =>
+      reply({
+        seq,
+        ok: false,
+        committedAt: performance.timeOrigin + performance.now(),
+        error: error instanceof Error ? `${error.name}: ${error.message}` : String(error),
+      }),
+  );
+};
+
+function reply(result: TapWritten) {
+  scope.postMessage(result);
+}
