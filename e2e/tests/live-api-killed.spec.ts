@@ -1,0 +1,97 @@
+import assert from 'node:assert/strict';
+import { after, before, describe, it } from 'node:test';
+import pg from 'pg';
+import type { Browser } from 'playwright-core';
+import { signIn } from '../support/browser';
+import { databaseUrl } from '../support/env';
+import { launchChromium, localIds, serverIds, tap } from '../support/live';
+import { freePort, OwnServer } from '../support/own-server';
+
+const QUEUED = 2500; // five batches of 500: the sync is still under way when the API dies
+
+// Plain JavaScript for the page: events as the app stores them, straight into IndexedDB, as if
+// tapped while offline (2,500 taps by hand would take minutes).
+const queueInPage = `async ({ id, n }) => {
+  const db = await new Promise((ok, ko) => { const r = indexedDB.open('upstroke'); r.onsuccess = () => ok(r.result); r.onerror = () => ko(r.error); });
+  const tx = db.transaction('events', 'readwrite');
+  const t0 = Date.now();
+  for (let i = 0; i < n; i++) tx.objectStore('events').add({ id: crypto.randomUUID(), resuscitationId: id,
+    at: new Date(t0 + i).toISOString(), kind: 'note', data: { text: 'queued ' + i }, deviceId: 'e2e' });
+  await new Promise((ok) => { tx.oncomplete = ok; });
+  db.close();
+}`;
+
+describe('live recording while the API is killed during a sync', () => {
+  let browser: Browser;
+  let close: () => Promise<void>;
+  let server: OwnServer;
+  let db: pg.Client;
+  before(async () => {
+    ({ browser, close } = await launchChromium());
+    server = new OwnServer(await freePort());
+    await server.start();
+    db = new pg.Client({ connectionString: databaseUrl });
+    await db.connect();
+  });
+  after(async () => {
+    await server.kill();
+    await db.end();
+    await close();
+  });
+
+  const stored = async (id: string) =>
+    Number(
+      (
+        await db.query<{ n: string }>(
+          'select count(*) as n from resuscitation_events where resuscitation_id = $1',
+          [id],
+        )
+      ).rows[0].n,
+    );
+
+  it('loses nothing and duplicates nothing when the API dies mid-sync and comes back', async (t) => {
+    const context = await browser.newContext({
+      baseURL: server.url,
+      viewport: { width: 1280, height: 800 },
+    });
+    const page = await context.newPage();
+    await signIn(page, 'recorder');
+    await page.getByRole('button', { name: 'Start', exact: true }).click();
+    await page.waitForURL(/\/live\/[0-9a-f-]{36}$/);
+    const recordId = page.url().split('/').pop() as string;
+    await page.getByRole('status', { name: 'Sync: All saved' }).waitFor();
+
+    await context.setOffline(true);
+    await page.getByRole('status', { name: /^Sync: Offline/ }).waitFor();
+    for (const name of ['Compressions', 'ROSC', 'Re-arrest', 'Compressions']) await tap(page, name);
+    await page.evaluate(`(${queueInPage})(${JSON.stringify({ id: recordId, n: QUEUED })})`);
+    const queued = await localIds(page, recordId);
+    assert.equal(queued.events.length, QUEUED + 4);
+
+    // Back online; SIGKILL the API as soon as the first batch is in the database.
+    await context.setOffline(false);
+    const deadline = Date.now() + 15_000;
+    while ((await stored(recordId)) === 0 && Date.now() < deadline)
+      await new Promise((r) => setTimeout(r, 5));
+    await server.kill();
+    const atKill = await stored(recordId);
+    t.diagnostic(`killed with ${atKill} of ${queued.events.length} events stored`);
+    assert.ok(
+      atKill > 0 && atKill < queued.events.length,
+      `the API died during the sync (${atKill} of ${queued.events.length} stored)`,
+    );
+
+    // The tablet keeps recording while the API is down, and says what waits.
+    await tap(page, 'ROSC');
+    await tap(page, 'Re-arrest');
+    await page.getByRole('status', { name: /^Sync: \d+ waiting$/ }).waitFor();
+
+    await server.start();
+    await page.getByRole('status', { name: 'Sync: All saved' }).waitFor({ timeout: 60_000 });
+    const local = await localIds(page, recordId);
+    assert.equal(local.events.length, QUEUED + 6);
+    // Every id the tablet holds is on the server exactly once, and nothing else is.
+    assert.deepEqual(await serverIds(recordId), local);
+    await context.close();
+  });
+});
