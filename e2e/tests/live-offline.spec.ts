@@ -120,4 +120,41 @@ describe('live recording offline, then lossless sync', () => {
     assert.deepEqual(await serverIds(recordId), local);
     await context.close();
   });
+
+  it("shows each tablet the other's taps: the epinephrine timer counts a dose given on the other tablet", async () => {
+    const a = await newTabletContext(browser);
+    const b = await newTabletContext(browser);
+    const pageA = await a.newPage();
+    const pageB = await b.newPage();
+    await signIn(pageA, 'recorder');
+    await pageA.getByRole('button', { name: 'Start', exact: true }).click();
+    await pageA.waitForURL(/\/live\/[0-9a-f-]{36}$/);
+    const recordId = pageA.url().split('/').pop() as string;
+    await tap(pageA, 'Compressions');
+    await pageA.getByRole('status', { name: 'Sync: All saved' }).waitFor();
+
+    await signIn(pageB, 'lead');
+    await pageB.goto(`/live/${recordId}`);
+    const sinceEpiB = pageB.getByRole('timer', { name: 'Since epinephrine' });
+    await pageB.getByRole('heading', { name: 'Recorded: 1 events, 0 EtCO2 values' }).waitFor();
+    assert.equal(await sinceEpiB.textContent(), '—');
+
+    await tapAndPick(pageA, 'Drug', 'Epinephrine 1 mg');
+    await pageB
+      .getByRole('heading', { name: 'Recorded: 2 events, 0 EtCO2 values' })
+      .waitFor({ timeout: 15_000 });
+    assert.match((await sinceEpiB.textContent()) ?? '', /^\d+:\d\d$/);
+
+    await tap(pageB, 'ROSC');
+    await pageA
+      .getByRole('heading', { name: 'Recorded: 3 events, 0 EtCO2 values' })
+      .waitFor({ timeout: 15_000 });
+    await pageB.getByRole('status', { name: 'Sync: All saved' }).waitFor();
+    const server = await serverIds(recordId);
+    assert.equal(server.events.length, 3);
+    assert.deepEqual(await localIds(pageA, recordId), server);
+    assert.deepEqual(await localIds(pageB, recordId), server);
+    await a.close();
+    await b.close();
+  });
 });

@@ -19,3 +19,4 @@ export {
 } from './record';
 export { startSync, syncEngine } from './engine-instance';
 export { useSyncState, type SyncState } from './use-sync-state';
+export { useRemoteEntries } from './use-remote-entries';

@@ -8,11 +8,12 @@ import {
 import { useLiveQuery } from 'dexie-react-hooks';
 import { useEffect, useMemo } from 'react';
 import { apiFetch } from '../../../lib/api-client';
-import { offlineDb, type SyncAck } from '../../../lib/offline';
+import { offlineDb, type SyncAck, useRemoteEntries } from '../../../lib/offline';
 
 /**
  * The record, its events and EtCO2 values as this tablet holds them (IndexedDB first). A
- * record started on another tablet is fetched once and kept locally so Live works offline.
+ * record started on another tablet is fetched once and kept locally so Live works offline;
+ * while online, what other tablets record for it is brought in every few seconds.
  */
 export function useLiveRecord(id: string) {
   const record = useLiveQuery(() => offlineDb.resuscitations.get(id), [id], null);
@@ -42,6 +43,8 @@ export function useLiveRecord(id: string) {
   useEffect(() => {
     if (record === undefined && remote.data) void adopt(remote.data);
   }, [record, remote.data]);
+  // Other tablets on the same code: their taps join this tablet's store.
+  useRemoteEntries(id, Boolean(record));
   return { record, events, etco2, acks, loadError: record === undefined ? remote.error : null };
 }
 

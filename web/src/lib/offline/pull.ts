@@ -1,0 +1,79 @@
+import { co2UnitSchema, etco2SourceSchema, eventKindSchema } from '@upstroke/contracts';
+import { z } from 'zod';
+import type { LocalEtco2, LocalEvent, OfflineDb, SyncAck } from './db';
+
+/** What the server holds for a record, as far as Live needs it (other fields are ignored). */
+export const remoteEntriesSchema = z.object({
+  events: z.array(
+    z.object({
+      id: z.string(),
+      at: z.string(),
+      kind: eventKindSchema,
+      data: z.record(z.string(), z.unknown()),
+      deviceId: z.string().nullish(),
+    }),
+  ),
+  etco2: z.array(
+    z.object({
+      id: z.string(),
+      at: z.string(),
+      value: z.number(),
+      unit: co2UnitSchema,
+      source: etco2SourceSchema,
+      deviceId: z.string().nullish(),
+    }),
+  ),
+});
+export type RemoteEntries = z.infer<typeof remoteEntriesSchema>;
+
+/**
+ * Brings what other tablets recorded for this record into this tablet's store, so its
+ * timers, prompts and log count every tablet's taps. They are stored as already on the
+ * server (an acknowledgement with each), so the outbox never sends them back. Entries
+ * already here are left alone. Returns how many were added.
+ */
+export async function mergeRemoteEntries(
+  db: OfflineDb,
+  resuscitationId: string,
+  remote: RemoteEntries,
+): Promise<number> {
+  const [haveEvents, haveValues] = await Promise.all([
+    db.events.bulkGet(remote.events.map((e) => e.id)),
+    db.etco2.bulkGet(remote.etco2.map((v) => v.id)),
+  ]);
+  const events: LocalEvent[] = remote.events
+    .filter((_, i) => haveEvents[i] === undefined)
+    .map((e) => ({
+      id: e.id,
+      resuscitationId,
+      at: e.at,
+      kind: e.kind,
+      data: e.data,
+      deviceId: e.deviceId ?? 'server',
+    }));
+  const values: LocalEtco2[] = remote.etco2
+    .filter((_, i) => haveValues[i] === undefined)
+    .map((v) => ({
+      id: v.id,
+      resuscitationId,
+      at: v.at,
+      value: v.value,
+      unit: v.unit,
+      source: v.source,
+      deviceId: v.deviceId ?? 'server',
+    }));
+  if (events.length + values.length === 0) return 0;
+  const acks: SyncAck[] = [...events, ...values].map((r) => ({
+    id: r.id,
+    resuscitationId,
+    state: 1,
+  }));
+  // Items and their acknowledgements together: the outbox never sees one without the other.
+  // bulkPut: a tap that landed meanwhile with the same id is the same entry.
+  await db.transaction('rw', db.events, db.etco2, db.acks, async () => {
+    await db.events.bulkPut(events);
+    await db.etco2.bulkPut(values);
+    await db.acks.bulkPut(acks);
+  });
+  return events.length + values.length;
+}
