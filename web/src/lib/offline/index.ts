@@ -20,3 +20,10 @@ export {
 export { startSync, syncEngine } from './engine-instance';
 export { useSyncState, type SyncState } from './use-sync-state';
 export { useRemoteEntries } from './use-remote-entries';
+export {
+  listSyncProblems,
+  retrySyncProblems,
+  type RefusedItem,
+  type RefusedOp,
+  type SyncProblems,
+} from './sync-problems';

@@ -1,0 +1,52 @@
+import { render, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it } from 'vitest';
+import { offlineDb } from '../../../lib/offline';
+import { SyncProblems } from './sync-problems';
+
+const recordId = '3d1f5a2b-6c7d-4e8f-9a0b-1c2d3e4f5a6b';
+const valueId = '4e2a6b3c-7d8e-4f9a-8b1c-2d3e4f5a6b7c';
+
+afterEach(async () => {
+  await Promise.all([offlineDb.etco2.clear(), offlineDb.acks.clear(), offlineDb.outbox.clear()]);
+});
+
+describe('sync problems in the top bar', () => {
+  it('stays hidden while the server has accepted everything', async () => {
+    render(<SyncProblems />);
+    // Give the live query a moment to answer before checking that nothing is drawn.
+    await new Promise((r) => setTimeout(r, 50));
+    expect(screen.queryByRole('button', { name: /not accepted/ })).toBeNull();
+  });
+
+  it('shows a refused value with its reason and sends it again without changing it', async () => {
+    await offlineDb.etco2.add({
+      id: valueId,
+      resuscitationId: recordId,
+      at: '2026-03-04T10:05:00.000Z',
+      value: 12,
+      unit: 'mmHg',
+      source: 'manual',
+      deviceId: 'd',
+    });
+    await offlineDb.acks.add({
+      id: valueId,
+      resuscitationId: recordId,
+      state: 2,
+      reason: 'resuscitation is signed',
+    });
+    const user = userEvent.setup();
+    render(<SyncProblems />);
+    await user.click(await screen.findByRole('button', { name: 'Sync: 1 not accepted — show' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Not accepted by the server' });
+    const list = await within(dialog).findByRole('list', { name: 'Entries not accepted' });
+    expect(within(list).getByText(/EtCO2 12 mmHg \(EtCO2 value\) · record 3d1f5a2b/)).toBeVisible();
+    expect(within(list).getByText('resuscitation is signed')).toBeVisible();
+
+    await user.click(within(dialog).getByRole('button', { name: 'Send again' }));
+    expect(await within(dialog).findByRole('status')).toHaveTextContent('1 sent back to the queue');
+    expect(await offlineDb.acks.count()).toBe(0);
+    expect(await offlineDb.etco2.get(valueId)).toMatchObject({ value: 12, unit: 'mmHg' });
+    expect(await within(dialog).findByText('Nothing is waiting here: all accepted.')).toBeVisible();
+  });
+});
