@@ -2,6 +2,7 @@
  * Plain words for events, findings and closing details, shared by the Debrief screen, the
  * PDF and the FHIR export so that the record reads the same everywhere.
  */
+import type { RosterRole } from './site-context.js';
 
 const rhythmNames: Record<string, string> = {
   vf: 'VF',
@@ -178,3 +179,16 @@ export const eventMarkerCodes: Record<string, string> = {
   note: 'N',
   end: 'End',
 };
+
+/** Team roles in plain words (roster dialog, debrief e-mail). */
+export const rosterRoleLabels: Record<RosterRole, string> = {
+  lead: 'Lead',
+  compressor: 'Compressions',
+  airway: 'Airway',
+  drugs: 'Drugs',
+  recorder: 'Recorder',
+};
+
+export function rosterRoleLabel(role: RosterRole): string {
+  return rosterRoleLabels[role];
+}

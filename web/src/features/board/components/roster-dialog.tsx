@@ -12,18 +12,17 @@ import {
   Stack,
   TextField,
 } from '@mui/material';
-import { type RosterMember, rosterMemberSchema } from '@upstroke/contracts';
+import {
+  type RosterMember,
+  rosterMemberSchema,
+  rosterRoleLabels,
+  rosterRoleSchema,
+} from '@upstroke/contracts';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { updateResuscitation } from '../../../lib/offline';
 
-const roles = [
-  { value: 'lead', label: 'Lead' },
-  { value: 'compressor', label: 'Compressions' },
-  { value: 'airway', label: 'Airway' },
-  { value: 'drugs', label: 'Drugs' },
-  { value: 'recorder', label: 'Recorder' },
-] as const;
+const roles = rosterRoleSchema.options.map((value) => ({ value, label: rosterRoleLabels[value] }));
 
 // The form keeps an empty e-mail as '' and sends it as absent.
 const formSchema = z.object({
