@@ -44,11 +44,13 @@ export class OwnServer {
   }
 
   async start(): Promise<void> {
+    // The built API loads the built packages: not the test runner's source-first conditions.
+    const { NODE_OPTIONS: _runnerOptions, ...inherited } = process.env;
     this.child = spawn('node', [path.join(root, 'api', 'dist', 'src', 'main.js')], {
       cwd: root,
       stdio: ['ignore', 'ignore', 'inherit'],
       env: {
-        ...process.env,
+        ...inherited,
         NODE_ENV: 'production',
         LOG_LEVEL: 'warn',
         PORT: String(this.port),
