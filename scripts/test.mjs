@@ -149,6 +149,8 @@ async function main() {
           'tsx',
           '--test',
           '--test-concurrency=1',
+          // A journey that hangs fails after 5 minutes instead of holding the run.
+          '--test-timeout=300000',
           '--test-reporter=spec',
           '--test-reporter-destination=stdout',
           '--test-reporter=tap',

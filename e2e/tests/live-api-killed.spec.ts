@@ -23,26 +23,27 @@ const queueInPage = `async ({ id, n }) => {
 
 describe('live recording while the API is killed during a sync', () => {
   let browser: Browser;
-  let close: () => Promise<void>;
-  let server: OwnServer;
-  let db: pg.Client;
+  let close: (() => Promise<void>) | undefined;
+  let server: OwnServer | undefined;
+  let db: pg.Client | undefined;
   before(async () => {
     ({ browser, close } = await launchChromium());
-    server = new OwnServer(await freePort());
-    await server.start();
     db = new pg.Client({ connectionString: databaseUrl });
     await db.connect();
+    server = new OwnServer(await freePort());
+    await server.start();
   });
   after(async () => {
-    await server.kill();
-    await db.end();
-    await close();
+    // Each part is let go even if set-up stopped half way, so the run never hangs.
+    await server?.kill();
+    await db?.end().catch(() => undefined);
+    await close?.();
   });
 
   const stored = async (id: string) =>
     Number(
       (
-        await db.query<{ n: string }>(
+        await (db as pg.Client).query<{ n: string }>(
           'select count(*) as n from resuscitation_events where resuscitation_id = $1',
           [id],
         )
@@ -50,8 +51,10 @@ describe('live recording while the API is killed during a sync', () => {
     );
 
   it('loses nothing and duplicates nothing when the API dies mid-sync and comes back', async (t) => {
+    if (!server) throw new Error('the app of this test did not start');
+    const app = server;
     const context = await browser.newContext({
-      baseURL: server.url,
+      baseURL: app.url,
       viewport: { width: 1280, height: 800 },
     });
     const page = await context.newPage();
@@ -73,7 +76,7 @@ describe('live recording while the API is killed during a sync', () => {
     const deadline = Date.now() + 15_000;
     while ((await stored(recordId)) === 0 && Date.now() < deadline)
       await new Promise((r) => setTimeout(r, 5));
-    await server.kill();
+    await app.kill();
     const atKill = await stored(recordId);
     t.diagnostic(`killed with ${atKill} of ${queued.events.length} events stored`);
     assert.ok(
@@ -86,7 +89,7 @@ describe('live recording while the API is killed during a sync', () => {
     await tap(page, 'Re-arrest');
     await page.getByRole('status', { name: /^Sync: \d+ waiting$/ }).waitFor();
 
-    await server.start();
+    await app.start();
     await page.getByRole('status', { name: 'Sync: All saved' }).waitFor({ timeout: 60_000 });
     const local = await localIds(page, recordId);
     assert.equal(local.events.length, QUEUED + 6);
