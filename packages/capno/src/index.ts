@@ -11,7 +11,7 @@ export {
 export { analyze, analyzeCore, ventilationRate, type CoreInput } from './analyze.js';
 export { BreathDetector, detectBreaths, type DetectedBreath } from './breaths/breath-detector.js';
 export { detectorDefaults, type DetectorOptions } from './breaths/options.js';
-export { etco2Series, etco2Trend, TREND_WINDOW_SEC } from './etco2/series.js';
+export { etco2Series, etco2Trend, TREND_WINDOW_SEC, valuesBesideWaveform } from './etco2/series.js';
 export { etco2Measures, MAX_HOLD_SEC, stepSegments } from './etco2/segments.js';
 export { normalizeEvents, type TimedEvent } from './events/normalize.js';
 export { buildTimeline, type Timeline } from './events/timeline.js';

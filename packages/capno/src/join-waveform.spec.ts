@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { joinWaveform } from './summary-row.js';
+import { analyze } from './analyze.js';
+import { valuesBesideWaveform } from './etco2/series.js';
+import { joinWaveform, storedRecordInput } from './summary-row.js';
+import { synthCapnogram } from './testing/synth-capnogram.js';
 
 const at = (sec: number) => new Date(Date.parse('2026-03-04T10:00:00Z') + sec * 1000).toISOString();
 
@@ -24,5 +27,55 @@ describe('joinWaveform (one rule for the debrief and the audit summary)', () => 
 
   it('returns nothing for no chunks', () => {
     expect(joinWaveform([])).toBeUndefined();
+  });
+});
+
+describe('valuesBesideWaveform (a breath is counted once)', () => {
+  // A capnogram synthesised with known breaths (physical model in testing/synth-capnogram).
+  const cap = synthCapnogram({ durationSec: 120 });
+  const waveform = {
+    startAt: at(0),
+    sampleRateHz: cap.sampleRateHz,
+    unit: 'mmHg' as const,
+    values: Array.from(cap.values),
+  };
+  // What the monitor link would also have stored: one value per breath, read off the same trace.
+  const perBreath = cap.truth.breaths.map((b) => ({
+    at: at(b.tSec),
+    value: b.etco2MmHg,
+    unit: 'mmHg' as const,
+    source: 'stream' as const,
+  }));
+  const typed = { at: at(30), value: 18, unit: 'mmHg' as const, source: 'manual' as const };
+  const afterTrace = { at: at(200), value: 25, unit: 'mmHg' as const, source: 'stream' as const };
+
+  it('leaves out values read off the analysed capnogram within its span; keeps typed and later ones', () => {
+    expect(valuesBesideWaveform([...perBreath, typed, afterTrace], waveform)).toEqual([
+      typed,
+      afterTrace,
+    ]);
+    expect(valuesBesideWaveform(perBreath, undefined)).toEqual(perBreath);
+  });
+
+  it('gives the audit summary the same EtCO2 figures with or without the stored per-breath values', () => {
+    const base = {
+      id: 'r1',
+      siteId: 's1',
+      unitId: null,
+      arrestAt: at(0),
+      events: [],
+      waveform: [
+        {
+          startAt: at(0),
+          sampleRateHz: cap.sampleRateHz,
+          unit: 'mmHg' as const,
+          values: waveform.values,
+        },
+      ],
+    };
+    const alone = storedRecordInput({ ...base, etco2: [] });
+    const both = storedRecordInput({ ...base, etco2: perBreath });
+    expect(both.etco2).toEqual([]);
+    expect(analyze(both).breaths.length).toBe(analyze(alone).breaths.length);
   });
 });

@@ -10,6 +10,7 @@ import {
 } from '@upstroke/contracts';
 import { analyze } from './analyze.js';
 import { summarize } from './summary.js';
+import { valuesBesideWaveform } from './etco2/series.js';
 
 /** A record as stored: the resuscitation row, its clinical data and its protocol profile. */
 export interface StoredRecord {
@@ -76,12 +77,13 @@ export function storedRecordInput(record: StoredRecord): AnalysisInput {
     const issue = parsed.error.issues[0];
     throw new Error(`record ${record.id}: ${issue.path.join('.')}: ${issue.message}`);
   }
+  const waveform = record.waveform?.length ? joinWaveform(record.waveform) : undefined;
   return {
     arrestAt: record.arrestAt,
     profile: record.profile?.thresholds,
     events: parsed.data.events,
-    etco2: parsed.data.etco2 ?? [],
-    waveform: record.waveform?.length ? joinWaveform(record.waveform) : undefined,
+    etco2: valuesBesideWaveform(parsed.data.etco2 ?? [], waveform),
+    waveform,
   };
 }
 

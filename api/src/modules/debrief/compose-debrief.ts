@@ -1,4 +1,4 @@
-import { analyze, etco2Series, resolveThresholds } from '@upstroke/capno';
+import { analyze, etco2Series, resolveThresholds, valuesBesideWaveform } from '@upstroke/capno';
 import {
   type Debrief,
   type ProfileInput,
@@ -52,7 +52,8 @@ export function composeDebrief(p: DebriefParts): { debrief: Debrief; waveform?: 
   const arrest = new Date(arrestAt);
   const profile = profileOf(p.profile);
   const waveform = assembleWaveform(p.chunks);
-  const values = analysisEtco2(p.etco2);
+  // Per-breath values read off the same capnogram are not counted twice (capno's rule).
+  const values = valuesBesideWaveform(analysisEtco2(p.etco2), waveform);
   const output = analyze({
     arrestAt,
     profile: profile.thresholds,

@@ -4,12 +4,36 @@ import type {
   Etco2Point,
   Etco2Source,
   Etco2TrendPoint,
+  Waveform,
 } from '@upstroke/contracts';
 import { median, secondsFrom } from '../time.js';
 import { toMmHg } from '../units.js';
 
 /** Default trend window: one median per 30 s (common practice for a debrief timeline). */
 export const TREND_WINDOW_SEC = 30;
+
+/** Sources whose values are read off a capnogram by the monitor link or a monitor file. */
+const derivedSources = new Set<Etco2Source>(['stream', 'import', 'waveform']);
+
+/**
+ * The stored values to analyse beside a waveform: when the capnogram itself is analysed,
+ * the per-breath values that were read off it (monitor link, monitor file) inside the time
+ * it covers would count every breath twice, so they are left out; typed values, and values
+ * outside the capnogram's span (its breaths are not there), stay. Without a waveform all stay.
+ */
+export function valuesBesideWaveform(
+  values: readonly AnalysisEtco2[],
+  waveform: Waveform | undefined,
+): AnalysisEtco2[] {
+  if (!waveform || waveform.values.length === 0) return [...values];
+  const from = Date.parse(waveform.startAt);
+  const to = from + (waveform.values.length / waveform.sampleRateHz) * 1000;
+  return values.filter((v) => {
+    if (!derivedSources.has(v.source)) return true;
+    const t = Date.parse(v.at);
+    return t < from || t > to;
+  });
+}
 
 /**
  * The merged EtCO2 series in mmHg, sorted by time: entered and imported values keep their
