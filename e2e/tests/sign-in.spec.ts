@@ -20,6 +20,17 @@ describe('sign-in and role menus', () => {
   });
   after(() => close());
 
+  it('stores the app for offline use on the first visit, before anyone signs in', async () => {
+    const context = await newTabletContext(browser);
+    const page = await context.newPage();
+    await page.goto('/sign-in');
+    assert.equal(await page.evaluate(() => navigator.serviceWorker.ready.then(() => true)), true);
+    await context.setOffline(true);
+    await page.reload();
+    await page.getByLabel('Email').waitFor();
+    await context.close();
+  });
+
   for (const role of Object.keys(menus) as DemoRole[]) {
     it(`signs in the ${role} and shows that role's menu`, async () => {
       const context = await newTabletContext(browser);
