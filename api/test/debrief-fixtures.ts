@@ -91,7 +91,16 @@ export async function signedRecord(t: TestApp, withWaveform = false) {
     .http()
     .patch(made.url)
     .set(...set)
-    .send({ outcome: 'died', firstRhythm: 'vf', witnessed: true, monitored: true })
+    .send({
+      outcome: 'died',
+      firstRhythm: 'vf',
+      witnessed: true,
+      monitored: true,
+      roster: [
+        { name: 'A. Lead', role: 'lead', email: 'a.lead@kestrel.test' },
+        { name: 'B. Airway', role: 'airway' },
+      ],
+    })
     .expect(200);
   await t
     .http()

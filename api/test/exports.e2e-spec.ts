@@ -81,6 +81,9 @@ describe('PDF report', () => {
     expect(text).toContain('Page1of');
     expect(text).toContain(squash('Kestrel Bay Regional Hospital'));
     expect(text).toContain('MRN-TEST-1');
+    // The team present, with roles; their e-mail addresses stay out of the chart record.
+    expect(text).toContain(squash('Team: A. Lead (Lead), B. Airway (Airway)'));
+    expect(text).not.toContain('a.lead@kestrel.test');
   });
 
   it('uses the site paper size and lets quality download but not recorders or admins', async () => {

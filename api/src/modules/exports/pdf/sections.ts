@@ -6,6 +6,7 @@ import {
   findingKindLabels,
   outcomeLabels,
   rhythmName,
+  rosterRoleLabels,
 } from '@upstroke/contracts';
 import { colors, type Layout } from './layout';
 import { measureRows } from './measures';
@@ -54,6 +55,8 @@ export function drawHeader(l: Layout, d: Debrief): void {
     ],
     4,
   );
+  const team = (r.roster ?? []).map((m) => `${m.name} (${rosterRoleLabels[m.role]})`).join(', ');
+  l.text(`Team: ${team || 'not recorded'}`, l.left, l.doc.y, { size: 9, color: colors.ink });
   l.text(`Times are shown in ${l.timeZone}; "+m:ss" is time from the arrest.`, l.left, l.doc.y, {
     size: 7.5,
     color: colors.muted,
