@@ -40,7 +40,12 @@ describe("other tablets' entries", () => {
       etco2: [value],
     };
 
-    expect(await mergeRemoteEntries(db, rec.id, remote)).toBe(2);
+    // Ids the screen already holds are skipped without a look-up.
+    expect(
+      await mergeRemoteEntries(db, rec.id, remote, new Set([mine.id, theirs.id, value.id])),
+    ).toBe(0);
+    expect(await db.events.get(theirs.id)).toBeUndefined();
+    expect(await mergeRemoteEntries(db, rec.id, remote, new Set([mine.id]))).toBe(2);
     expect(await db.events.get(theirs.id)).toMatchObject({
       resuscitationId: rec.id,
       kind: 'drug',

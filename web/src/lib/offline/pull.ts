@@ -30,18 +30,23 @@ export type RemoteEntries = z.infer<typeof remoteEntriesSchema>;
  * Brings what other tablets recorded for this record into this tablet's store, so its
  * timers, prompts and log count every tablet's taps. They are stored as already on the
  * server (an acknowledgement with each), so the outbox never sends them back. Entries
- * already here are left alone. Returns how many were added.
+ * already here (in `known`, or found in the store) are left alone. Returns how many were added.
  */
 export async function mergeRemoteEntries(
   db: OfflineDb,
   resuscitationId: string,
   remote: RemoteEntries,
+  known: ReadonlySet<string> = new Set(),
 ): Promise<number> {
+  // What the screen already holds needs no look-up: usually nothing is left to read.
+  const newEvents = remote.events.filter((e) => !known.has(e.id));
+  const newValues = remote.etco2.filter((v) => !known.has(v.id));
+  if (newEvents.length + newValues.length === 0) return 0;
   const [haveEvents, haveValues] = await Promise.all([
-    db.events.bulkGet(remote.events.map((e) => e.id)),
-    db.etco2.bulkGet(remote.etco2.map((v) => v.id)),
+    db.events.bulkGet(newEvents.map((e) => e.id)),
+    db.etco2.bulkGet(newValues.map((v) => v.id)),
   ]);
-  const events: LocalEvent[] = remote.events
+  const events: LocalEvent[] = newEvents
     .filter((_, i) => haveEvents[i] === undefined)
     .map((e) => ({
       id: e.id,
@@ -51,7 +56,7 @@ export async function mergeRemoteEntries(
       data: e.data,
       deviceId: e.deviceId ?? 'server',
     }));
-  const values: LocalEtco2[] = remote.etco2
+  const values: LocalEtco2[] = newValues
     .filter((_, i) => haveValues[i] === undefined)
     .map((v) => ({
       id: v.id,

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { useSyncExternalStore } from 'react';
+import { useRef, useSyncExternalStore } from 'react';
 import { apiFetch } from '../api-client';
 import { offlineDb } from './db';
 import { syncEngine } from './engine-instance';
@@ -14,8 +14,15 @@ export const PULL_INTERVAL_MS = 5000;
  * already says when the server cannot be reached, and this tablet's own entries never wait
  * for it.
  */
-export function useRemoteEntries(resuscitationId: string, enabled: boolean): void {
+export function useRemoteEntries(
+  resuscitationId: string,
+  enabled: boolean,
+  /** Ids the screen already holds for this record (skips a store look-up for them). */
+  known: ReadonlySet<string>,
+): void {
   const { online } = useSyncExternalStore(syncEngine.subscribe, syncEngine.getState);
+  const knownNow = useRef(known);
+  knownNow.current = known;
   useQuery({
     queryKey: ['resuscitations', resuscitationId, 'other-tablets'],
     queryFn: async () =>
@@ -23,6 +30,7 @@ export function useRemoteEntries(resuscitationId: string, enabled: boolean): voi
         offlineDb,
         resuscitationId,
         await apiFetch(`/resuscitations/${resuscitationId}`, { schema: remoteEntriesSchema }),
+        knownNow.current,
       ),
     enabled: enabled && online,
     refetchInterval: PULL_INTERVAL_MS,
