@@ -136,6 +136,37 @@ describe('live recording: context, roster, merging tablets, replays', () => {
     );
   });
 
+  it("gives a tablet only what the server received since its last ask (other tablets' taps)", async () => {
+    const rec = await create();
+    const entries = async (since?: string) =>
+      t
+        .http()
+        .get(`/api/resuscitations/${rec.id}/entries`)
+        .query(since ? { since } : {})
+        .set(...(await auth('recorder')));
+    await post(rec.id, 'events/batch', { events: [anEvent('arrest', 0)] }, 'tablet-a');
+    await post(rec.id, 'etco2/batch', { samples: [anEtco2(20, 9)] }, 'tablet-a');
+    const first = await entries();
+    expect(first.status).toBe(200);
+    expect(first.body.events.map((e: { kind: string }) => e.kind)).toEqual(['arrest']);
+    expect(first.body.etco2).toMatchObject([{ value: 9, unit: 'mmHg', deviceId: 'tablet-a' }]);
+
+    const dose = anEvent('drug', 95, { drug: 'epinephrine', dose: 1, unit: 'mg' });
+    await post(rec.id, 'events/batch', { events: [dose] }, 'tablet-b');
+    const next = await entries(first.body.serverTime);
+    expect(next.body.events).toEqual([
+      { id: dose.id, at: dose.at, kind: 'drug', data: dose.data, deviceId: 'tablet-b' },
+    ]);
+    expect(next.body.etco2).toEqual([]);
+    expect(Date.parse(next.body.serverTime)).toBeGreaterThanOrEqual(
+      Date.parse(first.body.serverTime),
+    );
+
+    const bad = await entries('yesterday');
+    expect(bad.status).toBe(400);
+    expect(JSON.stringify(bad.body.details)).toContain('since');
+  });
+
   it('loses nothing and duplicates nothing when a response is lost mid-sync and the tablet resends', async () => {
     const rec = await create();
     const events = Array.from({ length: 30 }, (_, i) => anEvent('note', i, { text: `n${i}` }));

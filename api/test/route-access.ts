@@ -16,6 +16,7 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'POST /api/resuscitations': clinical,
   'GET /api/resuscitations': readers,
   'GET /api/resuscitations/{id}': readers,
+  'GET /api/resuscitations/{id}/entries': readers,
   'PATCH /api/resuscitations/{id}': clinical,
   'POST /api/resuscitations/{id}/events/batch': clinical,
   'POST /api/resuscitations/{id}/etco2/batch': clinical,

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { co2UnitSchema, isoDateTimeSchema, uuidSchema } from './common.js';
 import { etco2SourceSchema } from './analysis.js';
-import { endReasonSchema, rhythmSchema } from './events.js';
+import { endReasonSchema, eventKindSchema, rhythmSchema } from './events.js';
 import { rosterSchema } from './site-context.js';
 
 export const ageGroupSchema = z.enum(['adult', 'child', 'infant']);
@@ -112,3 +112,35 @@ export const waveformChunkSchema = z
   })
   .strict();
 export type WaveformChunk = z.infer<typeof waveformChunkSchema>;
+
+/** `GET /api/resuscitations/:id/entries?since=`: what the server received after `since`. */
+export const entriesQuerySchema = z.object({ since: isoDateTimeSchema.optional() });
+
+/**
+ * Events and EtCO2 values of a record received after `since` (all without it), for tablets
+ * recording the same code. `serverTime` is the next `since` (ask with some overlap: an entry
+ * is stamped when its transaction began).
+ */
+export const recordEntriesSchema = z.object({
+  serverTime: isoDateTimeSchema,
+  events: z.array(
+    z.object({
+      id: uuidSchema,
+      at: isoDateTimeSchema,
+      kind: eventKindSchema,
+      data: z.record(z.string(), z.unknown()),
+      deviceId: z.string().nullable(),
+    }),
+  ),
+  etco2: z.array(
+    z.object({
+      id: uuidSchema,
+      at: isoDateTimeSchema,
+      value: z.number(),
+      unit: co2UnitSchema,
+      source: etco2SourceSchema,
+      deviceId: z.string().nullable(),
+    }),
+  ),
+});
+export type RecordEntries = z.infer<typeof recordEntriesSchema>;

@@ -1,5 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Co2Unit, Etco2Source, EventKind } from '@upstroke/contracts';
+import type { Knex } from 'knex';
 import { KNEX, type Db } from '../../db/knex';
 
 export interface EventRow {
@@ -82,6 +83,38 @@ export class ClinicalDataRepository {
       .where({ resuscitationId })
       .orderBy('at')
       .select('id', 'resuscitationId', 'at', 'value', 'unit', 'valueMmhg', 'source', 'deviceId');
+  }
+
+  /**
+   * Events and EtCO2 values received after `since` (all without it), with the database's
+   * time at the start of the read: the caller's next `since`.
+   */
+  async entriesSince(resuscitationId: string, since?: Date) {
+    const now = await this.db.raw<{ rows: { now: Date }[] }>('select now() as now');
+    const after = <Q extends Knex.QueryBuilder>(q: Q) =>
+      since ? q.where('receivedAt', '>', since) : q;
+    const [events, etco2] = await Promise.all([
+      after(this.db('resuscitationEvents').where({ resuscitationId }))
+        .orderBy('at')
+        .select<Pick<EventRow, 'id' | 'at' | 'kind' | 'data' | 'deviceId'>[]>(
+          'id',
+          'at',
+          'kind',
+          'data',
+          'deviceId',
+        ),
+      after(this.db('etco2Samples').where({ resuscitationId }))
+        .orderBy('at')
+        .select<Pick<Etco2Row, 'id' | 'at' | 'value' | 'unit' | 'source' | 'deviceId'>[]>(
+          'id',
+          'at',
+          'value',
+          'unit',
+          'source',
+          'deviceId',
+        ),
+    ]);
+    return { serverTime: now.rows[0].now, events, etco2 };
   }
 
   async waveformChunks(resuscitationId: string): Promise<WaveformChunkRow[]> {

@@ -15,6 +15,7 @@ import {
   type BatchResult,
   type CreateResuscitation,
   createResuscitationSchema,
+  entriesQuerySchema,
   listResuscitationsQuerySchema,
   type PatchResuscitation,
   patchResuscitationSchema,
@@ -73,6 +74,16 @@ export class ResuscitationsController {
   @Get(':id')
   get(@CurrentUser() user: AuthUser, @Param('id', uuid) id: string) {
     return this.service.get(user, id);
+  }
+
+  @Roles('recorder', 'lead', 'quality')
+  @Get(':id/entries')
+  entries(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuid) id: string,
+    @Query(new ZodPipe(entriesQuerySchema)) query: z.infer<typeof entriesQuerySchema>,
+  ) {
+    return this.service.entries(user, id, query.since);
   }
 
   @Roles('recorder', 'lead')

@@ -1,5 +1,10 @@
 import { Injectable } from '@nestjs/common';
-import type { CreateResuscitation, PatchResuscitation, Resuscitation } from '@upstroke/contracts';
+import type {
+  CreateResuscitation,
+  PatchResuscitation,
+  RecordEntries,
+  Resuscitation,
+} from '@upstroke/contracts';
 import { type AuthUser, canSeeSite } from '../../common/auth.decorators';
 import { badRequest, conflict, forbidden } from '../../common/errors';
 import { AuditRepository } from '../audit/audit.repository';
@@ -87,6 +92,17 @@ export class ResuscitationsService {
         receivedAt: e.receivedAt.toISOString(),
       })),
       etco2: etco2.map((s) => ({ ...s, at: s.at.toISOString() })),
+    };
+  }
+
+  /** What the server received for a record after `since`: other tablets' taps for Live. */
+  async entries(user: AuthUser, id: string, since?: string): Promise<RecordEntries> {
+    await this.access.readable(user, id);
+    const r = await this.data.entriesSince(id, since ? new Date(since) : undefined);
+    return {
+      serverTime: r.serverTime.toISOString(),
+      events: r.events.map((e) => ({ ...e, at: e.at.toISOString() })),
+      etco2: r.etco2.map((v) => ({ ...v, at: v.at.toISOString() })),
     };
   }
 

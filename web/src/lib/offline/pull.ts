@@ -1,30 +1,8 @@
-import { co2UnitSchema, etco2SourceSchema, eventKindSchema } from '@upstroke/contracts';
-import { z } from 'zod';
+import type { RecordEntries } from '@upstroke/contracts';
 import type { LocalEtco2, LocalEvent, OfflineDb, SyncAck } from './db';
 
-/** What the server holds for a record, as far as Live needs it (other fields are ignored). */
-export const remoteEntriesSchema = z.object({
-  events: z.array(
-    z.object({
-      id: z.string(),
-      at: z.string(),
-      kind: eventKindSchema,
-      data: z.record(z.string(), z.unknown()),
-      deviceId: z.string().nullish(),
-    }),
-  ),
-  etco2: z.array(
-    z.object({
-      id: z.string(),
-      at: z.string(),
-      value: z.number(),
-      unit: co2UnitSchema,
-      source: etco2SourceSchema,
-      deviceId: z.string().nullish(),
-    }),
-  ),
-});
-export type RemoteEntries = z.infer<typeof remoteEntriesSchema>;
+/** What the server holds for a record, as far as Live needs it. */
+export type RemoteEntries = Pick<RecordEntries, 'events' | 'etco2'>;
 
 /**
  * Brings what other tablets recorded for this record into this tablet's store, so its

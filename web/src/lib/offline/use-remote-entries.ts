@@ -1,12 +1,18 @@
 import { useQuery } from '@tanstack/react-query';
+import { recordEntriesSchema } from '@upstroke/contracts';
 import { useRef, useSyncExternalStore } from 'react';
 import { apiFetch } from '../api-client';
 import { offlineDb } from './db';
 import { syncEngine } from './engine-instance';
-import { mergeRemoteEntries, remoteEntriesSchema } from './pull';
+import { mergeRemoteEntries } from './pull';
 
 /** How often Live asks the server for other tablets' entries while it is open and online. */
 export const PULL_INTERVAL_MS = 5000;
+/**
+ * Each ask reaches back this far before the server's last answer: an entry is stamped when
+ * its transaction began, so one committed just after an answer can carry an earlier time.
+ */
+const OVERLAP_MS = 30_000;
 
 /**
  * While Live is open and online, brings in what other tablets record for the same code
@@ -23,15 +29,21 @@ export function useRemoteEntries(
   const { online } = useSyncExternalStore(syncEngine.subscribe, syncEngine.getState);
   const knownNow = useRef(known);
   knownNow.current = known;
+  // The next `since`, for this record only (a new record starts from the beginning).
+  const since = useRef<{ id: string; at: string } | null>(null);
   useQuery({
     queryKey: ['resuscitations', resuscitationId, 'other-tablets'],
-    queryFn: async () =>
-      mergeRemoteEntries(
-        offlineDb,
-        resuscitationId,
-        await apiFetch(`/resuscitations/${resuscitationId}`, { schema: remoteEntriesSchema }),
-        knownNow.current,
-      ),
+    queryFn: async () => {
+      const from = since.current?.id === resuscitationId ? since.current.at : null;
+      const query = from ? `?since=${encodeURIComponent(from)}` : '';
+      const answer = await apiFetch(`/resuscitations/${resuscitationId}/entries${query}`, {
+        schema: recordEntriesSchema,
+      });
+      const added = await mergeRemoteEntries(offlineDb, resuscitationId, answer, knownNow.current);
+      const at = new Date(Date.parse(answer.serverTime) - OVERLAP_MS).toISOString();
+      since.current = { id: resuscitationId, at };
+      return added;
+    },
     enabled: enabled && online,
     refetchInterval: PULL_INTERVAL_MS,
     retry: false,
