@@ -13,7 +13,13 @@ export { BreathDetector, detectBreaths, type DetectedBreath } from './breaths/br
 export { detectorDefaults, type DetectorOptions } from './breaths/options.js';
 export { etco2Series, etco2Trend, TREND_WINDOW_SEC, valuesBesideWaveform } from './etco2/series.js';
 export { etco2Measures, MAX_HOLD_SEC, stepSegments } from './etco2/segments.js';
-export { normalizeEvents, type TimedEvent } from './events/normalize.js';
+export {
+  type CorrectableEvent,
+  eventsInForce,
+  normalizeEvents,
+  supersededByMap,
+  type TimedEvent,
+} from './events/normalize.js';
 export { buildTimeline, type Timeline } from './events/timeline.js';
 export { CAUTION } from './findings/index.js';
 export { LiveAnalyzer, type LiveOptions } from './live/live-analyzer.js';

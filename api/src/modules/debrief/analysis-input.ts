@@ -5,7 +5,7 @@ import type {
   Waveform,
   WaveformTrace,
 } from '@upstroke/contracts';
-import { arrayToMmHg, joinWaveform } from '@upstroke/capno';
+import { arrayToMmHg, joinWaveform, supersededByMap } from '@upstroke/capno';
 import type {
   Etco2Row,
   EventRow,
@@ -30,10 +30,7 @@ export function analysisEtco2(rows: readonly Etco2Row[]): AnalysisEtco2[] {
 
 /** Every stored event for display, with the correction that superseded it (if any). */
 export function debriefEvents(arrestAt: Date, rows: readonly EventRow[]): DebriefEvent[] {
-  const supersededBy = new Map<string, string>();
-  for (const e of rows) {
-    if (e.kind === 'correction') supersededBy.set(String(e.data.supersedes), e.id);
-  }
+  const supersededBy = supersededByMap(rows);
   return rows.map((e) => ({
     id: e.id,
     at: e.at.toISOString(),

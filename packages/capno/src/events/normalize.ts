@@ -25,7 +25,7 @@ export type TimedEventOf<K extends EventKind> = Extract<TimedEvent, { kind: K }>
  */
 export function normalizeEvents(arrestAt: string, input: readonly InputEvent[]): TimedEvent[] {
   const events = input as readonly AnalysisEvent[];
-  const corrections = activeCorrections(events.filter((e) => isCorrection(e)));
+  const corrections = activeCorrections<Correction>(events.filter((e) => isCorrection(e)));
   const supersededIds = new Set(corrections.map((c) => c.data.supersedes));
   const kept: AnalysisEvent[] = [];
   for (const e of events) {
@@ -46,17 +46,62 @@ export function normalizeEvents(arrestAt: string, input: readonly InputEvent[]):
 
 type Correction = Extract<AnalysisEvent, { kind: 'correction' }>;
 
+/** What the correction rules need of an event: stored, synced, debrief and live events all fit. */
+export interface CorrectableEvent {
+  id: string;
+  kind: string;
+  at: string;
+  data: unknown;
+}
+
+interface CorrectionFields {
+  supersedes: string;
+  replacement?: { kind: string; data: unknown; at: string };
+}
+
+const correctionData = (e: Pick<CorrectableEvent, 'data'>) => e.data as CorrectionFields;
+
 /** Corrections in force: latest first, a correction cancelled by one in force is not. */
-function activeCorrections(corrections: Correction[]): Correction[] {
+function activeCorrections<E extends CorrectableEvent>(corrections: E[]): E[] {
   const byTime = [...corrections].sort((a, b) => Date.parse(b.at) - Date.parse(a.at));
   const cancelled = new Set<string>();
-  const active: Correction[] = [];
+  const active: E[] = [];
   for (const c of byTime) {
     if (cancelled.has(c.id)) continue;
     active.push(c);
-    cancelled.add(c.data.supersedes);
+    cancelled.add(correctionData(c).supersedes);
   }
   return active.reverse();
+}
+
+/**
+ * The events as finally recorded, by the same rule as `normalizeEvents`: superseded events
+ * and corrections leave; a correction's replacement stands in its place (the correction's
+ * other fields, with the replacement's kind, data and time). Sorted by time, stable. For
+ * screens and exports that show events rather than analyse them (the replacement is not
+ * re-validated here).
+ */
+export function eventsInForce<E extends CorrectableEvent>(events: readonly E[]): E[] {
+  const corrections = activeCorrections(events.filter((e) => e.kind === 'correction'));
+  const superseded = new Set(corrections.map((c) => correctionData(c).supersedes));
+  const kept = events.filter((e) => e.kind !== 'correction' && !superseded.has(e.id));
+  for (const c of corrections) {
+    const r = correctionData(c).replacement;
+    if (r) kept.push({ ...c, kind: r.kind, data: r.data, at: r.at });
+  }
+  return kept
+    .map((e, i) => ({ e, i, t: Date.parse(e.at) }))
+    .sort((a, b) => a.t - b.t || a.i - b.i)
+    .map((x) => x.e);
+}
+
+/** For each superseded event, the correction that superseded it (id → correction id). */
+export function supersededByMap(
+  events: readonly Pick<CorrectableEvent, 'id' | 'kind' | 'data'>[],
+): Map<string, string> {
+  const map = new Map<string, string>();
+  for (const e of events) if (e.kind === 'correction') map.set(correctionData(e).supersedes, e.id);
+  return map;
 }
 
 function isCorrection(e: AnalysisEvent): e is Correction {

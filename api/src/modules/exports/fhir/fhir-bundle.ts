@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { arrayToMmHg } from '@upstroke/capno';
+import { arrayToMmHg, eventsInForce } from '@upstroke/capno';
 import { type Debrief, type DebriefEvent, drugName, type Waveform } from '@upstroke/contracts';
 import type * as R4 from './r4';
 import {
@@ -28,21 +28,6 @@ export function stableUuid(name: string): string {
   h[8] = (h[8] & 0x3f) | 0x80;
   const x = h.subarray(0, 16).toString('hex');
   return `${x.slice(0, 8)}-${x.slice(8, 12)}-${x.slice(12, 16)}-${x.slice(16, 20)}-${x.slice(20)}`;
-}
-
-/** Events as finally recorded: superseded ones left out, corrections' replacements in. */
-export function effectiveEvents(events: readonly DebriefEvent[]): DebriefEvent[] {
-  const out: DebriefEvent[] = [];
-  for (const e of events) {
-    if (e.supersededBy) continue;
-    if (e.kind !== 'correction') out.push(e);
-    else {
-      const r = e.data.replacement as
-        { kind: DebriefEvent['kind']; data: Record<string, unknown>; at: string } | undefined;
-      if (r) out.push({ ...e, kind: r.kind, data: r.data, at: r.at });
-    }
-  }
-  return out;
 }
 
 export interface FhirOptions {
@@ -98,7 +83,7 @@ export function toFhirBundle(d: Debrief, opts: FhirOptions): FhirBundle {
   });
   const cpr = cprProcedure(ctx);
   if (cpr) add('cpr', cpr);
-  for (const e of effectiveEvents(d.events)) {
+  for (const e of eventsInForce(d.events)) {
     if (e.kind === 'shock') add(`shock/${e.id}`, shockProcedure(ctx, e));
     if (e.kind === 'drug') add(`drug/${e.id}`, medicationOf(ctx, e));
   }

@@ -1,4 +1,4 @@
-import { analyze, etco2Series, resolveThresholds } from '@upstroke/capno';
+import { analyze, etco2Series, resolveThresholds, supersededByMap } from '@upstroke/capno';
 import type { Debrief, RecordingContext } from '@upstroke/contracts';
 import type { LocalEtco2, LocalEvent, LocalResuscitation, Tracked } from '../../../lib/offline';
 
@@ -33,9 +33,7 @@ export function debriefFromLocal({ record, events, etco2, context }: LocalRecord
     etco2: values,
   });
   const t0 = Date.parse(record.arrestAt);
-  const supersededBy = new Map<string, string>();
-  for (const e of evs)
-    if (e.kind === 'correction') supersededBy.set(String(e.data.supersedes), e.id);
+  const supersededBy = supersededByMap(evs);
   return {
     ...output,
     record: {

@@ -1,3 +1,4 @@
+import { eventsInForce } from '@upstroke/capno';
 import {
   clockFromArrest,
   type Debrief,
@@ -51,18 +52,10 @@ export interface TimelineModel {
   rises: Rise[];
 }
 
-/** Events as finally recorded: superseded ones out, a correction's replacement in its place. */
-export function effectiveEvents(events: readonly DebriefEvent[]): DebriefEvent[] {
-  const out: DebriefEvent[] = [];
-  for (const e of events) {
-    if (e.supersededBy) continue;
-    if (e.kind !== 'correction') out.push(e);
-    else {
-      const r = e.data.replacement as Pick<DebriefEvent, 'kind' | 'data' | 'at'> | undefined;
-      if (r) out.push({ ...e, ...r, tSec: e.tSec + (Date.parse(r.at) - Date.parse(e.at)) / 1000 });
-    }
-  }
-  return out.sort((a, b) => a.tSec - b.tSec);
+/** Events as finally recorded (capno's correction rule), on the debrief's clock. */
+export function effectiveEvents(d: Pick<Debrief, 'events' | 'record'>): DebriefEvent[] {
+  const t0 = Date.parse(d.record.arrestAt);
+  return eventsInForce(d.events).map((e) => ({ ...e, tSec: (Date.parse(e.at) - t0) / 1000 }));
 }
 
 /** Everything the timeline draws, from the debrief (pure: tested without a canvas). */
@@ -71,7 +64,7 @@ export function timelineModel(d: Debrief): TimelineModel {
     x: p.tSec,
     y: Math.round(p.mmHg * 10) / 10,
   });
-  const live = effectiveEvents(d.events);
+  const live = effectiveEvents(d);
   // With an `end` event the code's length is known; later entries (amendment notes) are
   // still listed but do not stretch the axis.
   const ended = d.events.some((e) => e.kind === 'end' && !e.supersededBy);

@@ -1,3 +1,4 @@
+import { eventsInForce } from '@upstroke/capno';
 import type { LocalEvent } from '../../../lib/offline';
 
 /** What the Live screen shows, derived from the tapped events (corrections applied). */
@@ -13,20 +14,9 @@ export interface LiveState {
   undoable: LocalEvent | null;
 }
 
-/** Events still in force: corrections hide the events they supersede. */
-export function effectiveEvents(events: LocalEvent[]): LocalEvent[] {
-  const superseded = new Set(
-    events
-      .filter((e) => e.kind === 'correction')
-      .map((e) => (e.data as { supersedes: string }).supersedes),
-  );
-  return events
-    .filter((e) => e.kind !== 'correction' && !superseded.has(e.id))
-    .sort((a, b) => a.at.localeCompare(b.at));
-}
-
 export function liveState(events: LocalEvent[]): LiveState {
-  const live = effectiveEvents(events);
+  // Capno's correction rule, as the debrief applies it.
+  const live = eventsInForce(events);
   const state: LiveState = {
     compressing: false,
     compressionsChangedAt: null,
