@@ -136,7 +136,12 @@ export function countWaiting(db: OfflineDb): Promise<number> {
   });
 }
 
-/** How many items the server refused (kept on the tablet with the reason). */
-export function countRefused(db: OfflineDb): Promise<number> {
-  return db.acks.where('state').equals(2).count();
+/** Record writes the server refused for good (kept, with the reason, until sent again). */
+export function failedOps(db: OfflineDb) {
+  return db.outbox.filter((o) => Boolean(o.failed));
+}
+
+/** How many items and record writes the server refused (kept on the tablet with the reason). */
+export async function countRefused(db: OfflineDb): Promise<number> {
+  return (await db.acks.where('state').equals(2).count()) + (await failedOps(db).count());
 }

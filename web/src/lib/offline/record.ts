@@ -14,7 +14,7 @@ import {
   offlineDb,
   type OfflineDb,
 } from './db';
-import { TapWriter } from './tap-writer';
+import { addTap, type TapTable, TapWriter } from './tap-writer';
 import { writeSignal } from './write-signal';
 
 /** The page's tap writer: a worker in the browser, this thread where workers are missing. */
@@ -30,15 +30,12 @@ export const tapWriter = new TapWriter(
 );
 
 /** Through the worker for the app's own store; straight in for another (tests). */
-async function commitTap(
-  table: 'events' | 'etco2',
+function commitTap(
+  table: TapTable,
   row: LocalEvent | LocalEtco2,
   db: OfflineDb | undefined,
 ): Promise<number> {
-  if (!db || db === offlineDb) return tapWriter.write(table, row);
-  if (table === 'events') await db.events.add(row as LocalEvent);
-  else await db.etco2.add(row as LocalEtco2);
-  return performance.now();
+  return !db || db === offlineDb ? tapWriter.write(table, row) : addTap(db, table, row);
 }
 
 export interface NewResuscitation {

@@ -1,5 +1,6 @@
 import { eventLabel } from '@upstroke/contracts';
 import type { OfflineDb } from './db';
+import { failedOps } from './outbox';
 import { writeSignal } from './write-signal';
 
 /** A record-level write (start, details, team) the server refused for good. */
@@ -30,8 +31,8 @@ export interface SyncProblems {
 
 /** Everything the server did not accept, for the person to see and send again. */
 export async function listSyncProblems(db: OfflineDb): Promise<SyncProblems> {
-  const failedOps = await db.outbox.filter((o) => Boolean(o.failed)).toArray();
-  const ops: RefusedOp[] = failedOps.map((o) => ({
+  const refusedOps = await failedOps(db).toArray();
+  const ops: RefusedOp[] = refusedOps.map((o) => ({
     seq: o.seq as number,
     op: o.op,
     resuscitationId: o.resuscitationId,
@@ -79,7 +80,7 @@ export async function listSyncProblems(db: OfflineDb): Promise<SyncProblems> {
  */
 export async function retrySyncProblems(db: OfflineDb): Promise<number> {
   const count = await db.transaction('rw', db.outbox, db.acks, async () => {
-    const ops = await db.outbox.filter((o) => Boolean(o.failed)).toArray();
+    const ops = await failedOps(db).toArray();
     for (const o of ops) await db.outbox.update(o.seq as number, { failed: undefined });
     const refused = await db.acks.where('state').equals(2).primaryKeys();
     await db.acks.bulkDelete(refused);

@@ -28,6 +28,24 @@ function isDuplicate(error: unknown): boolean {
 }
 
 /**
+ * Adds a tap on this thread; resolves with the commit time. A row already there (the same
+ * id, written before a worker failed) counts as written.
+ */
+export async function addTap(
+  db: OfflineDb,
+  table: TapTable,
+  row: LocalEvent | LocalEtco2,
+): Promise<number> {
+  try {
+    if (table === 'events') await db.events.add(row as LocalEvent);
+    else await db.etco2.add(row as LocalEtco2);
+  } catch (error) {
+    if (!isDuplicate(error)) throw error;
+  }
+  return performance.now();
+}
+
+/**
  * Writes taps (events and typed EtCO2 values) to IndexedDB through a dedicated worker, so a
  * commit never waits for the screen's thread to finish drawing. Where no worker can run
  * (tests, a worker that failed to load), it writes on this thread instead; writes the worker
@@ -91,14 +109,7 @@ export class TapWriter {
     for (const p of waiting) this.direct(p.write.table, p.write.row).then(p.resolve, p.reject);
   }
 
-  private async direct(table: TapTable, row: LocalEvent | LocalEtco2): Promise<number> {
-    const db = this.db();
-    try {
-      if (table === 'events') await db.events.add(row as LocalEvent);
-      else await db.etco2.add(row as LocalEtco2);
-    } catch (error) {
-      if (!isDuplicate(error)) throw error;
-    }
-    return performance.now();
+  private direct(table: TapTable, row: LocalEvent | LocalEtco2): Promise<number> {
+    return addTap(this.db(), table, row);
   }
 }

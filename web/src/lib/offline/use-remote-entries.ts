@@ -23,12 +23,13 @@ const OVERLAP_MS = 30_000;
 export function useRemoteEntries(
   resuscitationId: string,
   enabled: boolean,
-  /** Ids the screen already holds for this record (skips a store look-up for them). */
-  known: ReadonlySet<string>,
+  /** What the screen already holds for this record (no store look-up for those). */
+  held: readonly (readonly { id: string }[])[],
 ): void {
   const { online } = useSyncExternalStore(syncEngine.subscribe, syncEngine.getState);
-  const knownNow = useRef(known);
-  knownNow.current = known;
+  // Read when an answer arrives (every few seconds), not on every tap.
+  const heldNow = useRef(held);
+  heldNow.current = held;
   // The next `since`, for this record only (a new record starts from the beginning).
   const since = useRef<{ id: string; at: string } | null>(null);
   useQuery({
@@ -39,7 +40,8 @@ export function useRemoteEntries(
       const answer = await apiFetch(`/resuscitations/${resuscitationId}/entries${query}`, {
         schema: recordEntriesSchema,
       });
-      const added = await mergeRemoteEntries(offlineDb, resuscitationId, answer, knownNow.current);
+      const known = new Set(heldNow.current.flatMap((rows) => rows.map((r) => r.id)));
+      const added = await mergeRemoteEntries(offlineDb, resuscitationId, answer, known);
       const at = new Date(Date.parse(answer.serverTime) - OVERLAP_MS).toISOString();
       since.current = { id: resuscitationId, at };
       return added;

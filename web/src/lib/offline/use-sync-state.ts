@@ -18,13 +18,7 @@ export interface SyncState {
 export function useSyncState(): SyncState {
   const engine = useSyncExternalStore(syncEngine.subscribe, syncEngine.getState);
   const waiting = useLiveQuery(() => countWaiting(offlineDb), [], 0);
-  const refused = useLiveQuery(
-    async () =>
-      (await countRefused(offlineDb)) +
-      (await offlineDb.outbox.filter((o) => Boolean(o.failed)).count()),
-    [],
-    0,
-  );
+  const refused = useLiveQuery(() => countRefused(offlineDb), [], 0);
   const status = !engine.online ? 'offline' : waiting > 0 ? 'waiting' : 'saved';
   return {
     status,

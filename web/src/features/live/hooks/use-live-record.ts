@@ -44,11 +44,7 @@ export function useLiveRecord(id: string) {
     if (record === undefined && remote.data) void adopt(remote.data);
   }, [record, remote.data]);
   // Other tablets on the same code: their taps join this tablet's store.
-  const known = useMemo(
-    () => new Set([...events.map((e) => e.id), ...etco2.map((v) => v.id)]),
-    [events, etco2],
-  );
-  useRemoteEntries(id, Boolean(record), known);
+  useRemoteEntries(id, Boolean(record), [events, etco2]);
   return { record, events, etco2, acks, loadError: record === undefined ? remote.error : null };
 }
 
