@@ -13,7 +13,10 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { loadavg } from 'node:os';
 import { resolve } from 'node:path';
 import pg from 'pg';
-import { chromium, type Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
+// The browser tests' launcher and queue helper: the bench drives the app the same way.
+import { launchBrowser } from '../e2e/support/browser';
+import { queueEvents } from '../e2e/support/live';
 
 const RESULTS = resolve(__dirname, 'results.json');
 const baseUrl = process.env.BENCH_BASE_URL;
@@ -31,19 +34,6 @@ async function countEvents(db: pg.Client, id: string): Promise<number> {
   );
   return Number(r.rows[0].n);
 }
-
-// Plain JavaScript for the page (tsx would inject helpers the page lacks): queue events the
-// way the app stores them, straight into IndexedDB, as if tapped while offline.
-const queueInPage = `async ({ id, n }) => {
-  const db = await new Promise((ok, ko) => { const r = indexedDB.open('upstroke'); r.onsuccess = () => ok(r.result); r.onerror = () => ko(r.error); });
-  const tx = db.transaction('events', 'readwrite');
-  const store = tx.objectStore('events');
-  const t0 = Date.now();
-  for (let i = 0; i < n; i++) store.add({ id: crypto.randomUUID(), resuscitationId: id, at: new Date(t0 + i).toISOString(),
-    kind: 'note', data: { text: 'bench ' + i }, deviceId: 'bench' });
-  await new Promise((ok) => { tx.oncomplete = ok; });
-  db.close();
-}`;
 
 // The floor on this machine: 500 sequential single-row IndexedDB writes on an idle page.
 const rawWrites = `async (n) => {
@@ -79,16 +69,7 @@ async function main(): Promise<void> {
     );
     return;
   }
-  const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-    ],
-  });
+  const { browser } = await launchBrowser();
   const db = new pg.Client({ connectionString: databaseUrl });
   await db.connect();
   try {
@@ -110,7 +91,7 @@ async function main(): Promise<void> {
 
     await context.setOffline(true);
     await page.getByRole('status', { name: /^Sync: Offline/ }).waitFor();
-    await page.evaluate(`(${queueInPage})(${JSON.stringify({ id, n: QUEUED })})`);
+    await queueEvents(page, id, QUEUED, 'bench');
     const t0 = performance.now();
     await context.setOffline(false);
     while ((await countEvents(db, id)) < before + QUEUED && performance.now() - t0 < 30_000)

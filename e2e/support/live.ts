@@ -96,3 +96,25 @@ export async function apiToken(role: string): Promise<string> {
 
 /** Chromium for this journey: the shared launcher. */
 export const launchChromium = launchBrowser;
+
+// Plain JavaScript for the page: events as the app stores them, straight into IndexedDB, as
+// if tapped while offline (thousands of taps by hand would take minutes).
+const queueInPage = `async ({ id, n, device }) => {
+  const db = await new Promise((ok, ko) => { const r = indexedDB.open('upstroke'); r.onsuccess = () => ok(r.result); r.onerror = () => ko(r.error); });
+  const tx = db.transaction('events', 'readwrite');
+  const t0 = Date.now();
+  for (let i = 0; i < n; i++) tx.objectStore('events').add({ id: crypto.randomUUID(), resuscitationId: id,
+    at: new Date(t0 + i).toISOString(), kind: 'note', data: { text: 'queued ' + i }, deviceId: device });
+  await new Promise((ok) => { tx.oncomplete = ok; });
+  db.close();
+}`;
+
+/** Queues `n` note events for a record in the tablet's store (used offline, before a sync). */
+export async function queueEvents(
+  page: Page,
+  recordId: string,
+  n: number,
+  device: string,
+): Promise<void> {
+  await page.evaluate(`(${queueInPage})(${JSON.stringify({ id: recordId, n, device })})`);
+}

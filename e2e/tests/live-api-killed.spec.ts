@@ -4,22 +4,10 @@ import pg from 'pg';
 import type { Browser } from 'playwright-core';
 import { signIn } from '../support/browser';
 import { databaseUrl } from '../support/env';
-import { launchChromium, localIds, serverIds, tap } from '../support/live';
+import { launchChromium, localIds, queueEvents, serverIds, tap } from '../support/live';
 import { freePort, OwnServer } from '../support/own-server';
 
 const QUEUED = 2500; // five batches of 500: the sync is still under way when the API dies
-
-// Plain JavaScript for the page: events as the app stores them, straight into IndexedDB, as if
-// tapped while offline (2,500 taps by hand would take minutes).
-const queueInPage = `async ({ id, n }) => {
-  const db = await new Promise((ok, ko) => { const r = indexedDB.open('upstroke'); r.onsuccess = () => ok(r.result); r.onerror = () => ko(r.error); });
-  const tx = db.transaction('events', 'readwrite');
-  const t0 = Date.now();
-  for (let i = 0; i < n; i++) tx.objectStore('events').add({ id: crypto.randomUUID(), resuscitationId: id,
-    at: new Date(t0 + i).toISOString(), kind: 'note', data: { text: 'queued ' + i }, deviceId: 'e2e' });
-  await new Promise((ok) => { tx.oncomplete = ok; });
-  db.close();
-}`;
 
 describe('live recording while the API is killed during a sync', () => {
   let browser: Browser;
@@ -67,7 +55,7 @@ describe('live recording while the API is killed during a sync', () => {
     await context.setOffline(true);
     await page.getByRole('status', { name: /^Sync: Offline/ }).waitFor();
     for (const name of ['Compressions', 'ROSC', 'Re-arrest', 'Compressions']) await tap(page, name);
-    await page.evaluate(`(${queueInPage})(${JSON.stringify({ id: recordId, n: QUEUED })})`);
+    await queueEvents(page, recordId, QUEUED, 'e2e');
     const queued = await localIds(page, recordId);
     assert.equal(queued.events.length, QUEUED + 4);
 
