@@ -165,14 +165,17 @@ function unexplainedPause(r: Rand, b: Builder, at: number): void {
   b.start(at + r.int(12, 30));
 }
 
-/** ROSC at a rhythm check; sustained codes end with it, others re-arrest and are stopped. */
+/**
+ * ROSC at a rhythm check; sustained codes are recorded until ROSC has lasted the Utstein
+ * 20 min (Nolan 2019), others re-arrest and are stopped.
+ */
 function roscAndAfter(r: Rand, b: Builder, c: CycleState, t: number) {
   b.add(t + 2, 'rhythm', { rhythm: 'organised' });
   b.add(t + 8, 'pulse', { present: true });
   const roscSec = t + 10;
   b.add(roscSec, 'rosc');
   if (c.outcome === 'rosc-sustained') {
-    const end = roscSec + r.int(8, 25) * 60;
+    const end = roscSec + r.int(20, 30) * 60;
     b.add(end, 'end', { reason: 'rosc-sustained' });
     return { roscSec, endSec: end };
   }

@@ -20,6 +20,18 @@ export {
   supersededByMap,
   type TimedEvent,
 } from './events/normalize.js';
+export {
+  intervalsOf,
+  nextState,
+  type PatientState,
+  type PatientStateInterval,
+  patientStates,
+  patientStatesOf,
+  type StateEvent,
+  stateAt,
+  SUSTAINED_ROSC_SEC,
+  sustainedRosc,
+} from './events/patient-state.js';
 export { buildTimeline, type Timeline } from './events/timeline.js';
 export { CAUTION } from './findings/index.js';
 export { LiveAnalyzer, type LiveOptions } from './live/live-analyzer.js';

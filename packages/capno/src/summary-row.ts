@@ -99,7 +99,6 @@ export function buildSummaryRow(record: StoredRecord): RecordSummaryRow {
     witnessed: record.witnessed ?? undefined,
     monitored: record.monitored ?? undefined,
     firstRhythm: record.firstRhythm ?? undefined,
-    sustainedRosc: record.outcome === 'rosc-sustained' ? true : undefined,
   });
   return {
     resuscitationId: record.id,

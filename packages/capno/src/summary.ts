@@ -10,9 +10,6 @@ import {
 import { firstOf, normalizeEvents } from './events/normalize.js';
 import { resolveThresholds } from './profile.js';
 
-/** Sustained ROSC (Utstein, Nolan 2019 — from memory): ≥ 20 min without compressions. */
-export const SUSTAINED_ROSC_SEC = 20 * 60;
-
 const SHOCKABLE: readonly Rhythm[] = ['vf', 'pvt'];
 
 function findingCounts(output: AnalysisOutput): Record<FindingKind, number> {
@@ -31,8 +28,9 @@ function findingCounts(output: AnalysisOutput): Record<FindingKind, number> {
  * - `firstRhythm`: the first `rhythm` event (closing details win); shockable = VF or pVT;
  * - `timeToCprSec`: time to first compressions;
  * - `anyRosc`: any documented ROSC period;
- * - `sustainedRosc`: a ROSC period of ≥ 20 min without compressions, or the record ended
- *   with reason `rosc-sustained`, or the lead attested it in the closing details;
+ * - `sustainedRosc`: the engine's Utstein sustained ROSC (a ROSC period of ≥ 20 min), never
+ *   the End choice; only when the record cannot tell (it ends in a shorter ROSC) does the
+ *   lead's attestation in the closing details count;
  * - `preshockPausesOverThreshold`: pre-shock parts longer than the profile's limit;
  * - `etco2Documented`: at least one EtCO2 value (entered, imported or from a breath).
  */
@@ -60,10 +58,7 @@ export function summarize(
     timeToFirstShockSec: m.timeToFirstShockSec,
     timeToFirstEpinephrineSec: m.timeToFirstEpinephrineSec,
     anyRosc: rosc.length > 0,
-    sustainedRosc:
-      rosc.some((r) => r.endSec - r.startSec >= SUSTAINED_ROSC_SEC) ||
-      endReason === 'rosc-sustained' ||
-      closingDetails.sustainedRosc === true,
+    sustainedRosc: (m.sustainedRosc ?? closingDetails.sustainedRosc) === true,
     compressionFraction: m.compressionFraction,
     longestPauseSec: m.longestPauseSec,
     preshockPausesOverThreshold: m.pauses.filter((p) => (p.preShockSec ?? 0) > limit).length,

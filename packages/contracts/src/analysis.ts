@@ -39,6 +39,14 @@ export type AnalysisInput = z.infer<typeof analysisInputSchema>;
 export const intervalSchema = z.object({ startSec: z.number(), endSec: z.number() });
 export type Interval = z.infer<typeof intervalSchema>;
 
+/** The patient's state (PRODUCT.md "Patient state"): CPR measures count pulseless time only. */
+export const patientStateSchema = z.enum(['pulseless', 'rosc', 'ended']);
+export type PatientState = z.infer<typeof patientStateSchema>;
+
+/** One stretch of a patient state, in seconds from the arrest. */
+export const patientStateIntervalSchema = intervalSchema.extend({ state: patientStateSchema });
+export type PatientStateInterval = z.infer<typeof patientStateIntervalSchema>;
+
 export const pauseContextSchema = z.enum([
   'pre-shock',
   'post-shock',
@@ -113,12 +121,19 @@ export const measuresSchema = z.object({
   }),
   /** Total compression time (s) inside the time without circulation. */
   compressionSec: z.number().optional(),
-  /** Denominator of the compression fraction (s): arrest to first ROSC or end, minus pulse intervals. */
+  /** Denominator of the compression fraction (s): all pulseless time (arrest and re-arrests). */
   timeWithoutCirculationSec: z.number().optional(),
   compressionIntervals: z.array(intervalSchema).optional(),
   rhythmCheckIntervalsSec: z.array(z.number()).optional(),
-  /** Documented circulation: ROSC to re-arrest or end of record. */
+  /** Documented circulation (ROSC or pulse present) to re-arrest or end of record. */
   roscPeriods: z.array(intervalSchema).optional(),
+  /** The patient's state over the record, from the events in force. */
+  patientStates: z.array(patientStateIntervalSchema).optional(),
+  /**
+   * Sustained ROSC by the Utstein definition (Nolan 2019): a ROSC period of ≥ 20 min. Null
+   * when the record ends in ROSC before 20 min have passed (the record cannot tell).
+   */
+  sustainedRosc: z.boolean().nullable().optional(),
 });
 export type Measures = z.infer<typeof measuresSchema>;
 

@@ -38,7 +38,7 @@ describe('CPR measures from the event log', () => {
     expect(m.compressionFraction).toBeCloseTo(515 / 600, 10);
   });
 
-  it('ends time without circulation at the first ROSC and leaves out pulse intervals', () => {
+  it('counts pulseless time only: a pulse present is ROSC until pulse absent', () => {
     const input = record([
       ...compressionEvents(0, 200, [[100, 110]]),
       ev('pulse', 100, { present: true }), // organised rhythm with a pulse: not a pause
@@ -50,7 +50,10 @@ describe('CPR measures from the event log', () => {
     expect(m.pauses).toEqual([]);
     expect(m.timeWithoutCirculationSec).toBe(192);
     expect(m.compressionFraction).toBeCloseTo(190 / 192, 10);
-    expect(m.roscPeriods).toEqual([{ startSec: 200, endSec: 400 }]);
+    expect(m.roscPeriods).toEqual([
+      { startSec: 100, endSec: 108 },
+      { startSec: 200, endSec: 400 },
+    ]);
   });
 
   it('applies corrections before analysis (removal, replacement, corrected corrections)', () => {

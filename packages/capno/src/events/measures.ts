@@ -1,6 +1,7 @@
 import type { Interval, Measures, Pause, PauseContext } from '@upstroke/contracts';
 import { intersect, totalLength } from './intervals.js';
 import { epinephrineTimes, firstOf, type TimedEvent } from './normalize.js';
+import { sustainedRosc } from './patient-state.js';
 import type { Timeline } from './timeline.js';
 
 /** A pause starting this soon after a shock is a post-shock pause (common practice). */
@@ -48,15 +49,16 @@ export function classifyPause(events: readonly TimedEvent[], s: number, e: numbe
 }
 
 /**
- * Pauses: each gap between one compression interval and the next, unless circulation was
- * documented during it (ROSC or a pulse), which makes it not a pause but a period of ROSC.
+ * Pauses: each gap between one compression interval and the next that lies wholly in
+ * pulseless time. A gap with ROSC in it (ROSC or a pulse documented) is not a pause: the
+ * hands-off time around it still counts against the compression fraction.
  */
 export function pausesOf(events: readonly TimedEvent[], tl: Timeline, from = -Infinity): Pause[] {
   const out: Pause[] = [];
   for (let k = 1; k < tl.compressions.length; k++) {
     const s = tl.compressions[k - 1].endSec;
     const e = tl.compressions[k].startSec;
-    if (e < from || overlaps(tl.rosc, s, e) || overlaps(tl.pulse, s, e)) continue;
+    if (e < from || overlaps(tl.rosc, s, e)) continue;
     out.push(classifyPause(events, s, e));
   }
   return out;
@@ -74,8 +76,10 @@ export function eventMeasures(
   pausesFrom = -Infinity,
 ): Omit<Measures, 'etco2' | 'ventilationRatePerMin'> {
   const pauses = pausesOf(events, tl, pausesFrom);
-  const compressionSec = totalLength(intersect(tl.compressions, tl.noCirculation));
-  const timeWithoutCirculationSec = totalLength(tl.noCirculation);
+  // Meaney 2013 (CPR-quality consensus): the share of pulseless time with compressions,
+  // over every pulseless segment (the arrest and each re-arrest).
+  const compressionSec = totalLength(intersect(tl.compressions, tl.pulseless));
+  const timeWithoutCirculationSec = totalLength(tl.pulseless);
   const rhythmTimes = events.filter((e) => e.kind === 'rhythm').map((e) => e.tSec);
   return {
     durationSec: tl.endSec,
@@ -92,5 +96,7 @@ export function eventMeasures(
     compressionIntervals: tl.compressions,
     rhythmCheckIntervalsSec: diffs(rhythmTimes),
     roscPeriods: tl.rosc,
+    patientStates: tl.states,
+    sustainedRosc: sustainedRosc(tl.states),
   };
 }

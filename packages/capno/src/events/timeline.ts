@@ -1,6 +1,6 @@
 import type { Interval } from '@upstroke/contracts';
-import { subtract } from './intervals.js';
 import { isKind, type TimedEvent } from './normalize.js';
+import { intervalsOf, patientStates, type PatientStateInterval } from './patient-state.js';
 
 /** The states of a resuscitation over time, derived from its events (seconds from arrest). */
 export interface Timeline {
@@ -8,12 +8,12 @@ export interface Timeline {
   endSec: number;
   /** Compressions from each `compressions-start` to the next stop; a `rosc` or `end` also stops them. */
   compressions: Interval[];
-  /** Documented circulation: `rosc` to `rearrest` (or compressions restarting, or end). */
+  /** The patient's state over the record (`patientStates`): pulseless, ROSC, ended. */
+  states: PatientStateInterval[];
+  /** Documented circulation (state `rosc`): ROSC or pulse present, to a re-arrest or the end. */
   rosc: Interval[];
-  /** Pulse present (organised rhythm with a pulse): to pulse absent, re-arrest, compressions or a non-organised rhythm. */
-  pulse: Interval[];
-  /** Time without circulation: arrest to first ROSC (or end), minus pulse intervals. */
-  noCirculation: Interval[];
+  /** Pulseless time (state `pulseless`): from the arrest and from each re-arrest. */
+  pulseless: Interval[];
   /** Tracheal tube in place: from its `airway` event to a later airway event with another device. */
   trachealTube: Interval[];
   /** Tracheal tube or supraglottic airway in place. */
@@ -36,24 +36,11 @@ class Toggle {
   }
 }
 
-function stepCirculation(e: TimedEvent, comp: Toggle, rosc: Toggle, pulse: Toggle): void {
-  const t = e.tSec;
-  if (isKind(e, 'compressions-start')) {
-    rosc.close(t);
-    pulse.close(t);
-    comp.open(t);
-  } else if (isKind(e, 'compressions-stop')) comp.close(t);
-  else if (isKind(e, 'rosc')) {
-    comp.close(t);
-    rosc.open(t);
-  } else if (isKind(e, 'rearrest')) {
-    rosc.close(t);
-    pulse.close(t);
-  } else if (isKind(e, 'pulse')) {
-    if (e.data.present) pulse.open(t);
-    else pulse.close(t);
-  } else if (isKind(e, 'rhythm') && e.data.rhythm !== 'organised') pulse.close(t);
-  else if (isKind(e, 'end')) comp.close(t);
+/** Compressions run from a start to a stop; a `rosc` or `end` entry also stops them. */
+function stepCompressions(e: TimedEvent, comp: Toggle): void {
+  if (isKind(e, 'compressions-start')) comp.open(e.tSec);
+  else if (e.kind === 'compressions-stop' || e.kind === 'rosc' || e.kind === 'end')
+    comp.close(e.tSec);
 }
 
 function stepAirway(e: TimedEvent, tube: Toggle, advanced: Toggle): void {
@@ -66,21 +53,20 @@ function stepAirway(e: TimedEvent, tube: Toggle, advanced: Toggle): void {
 
 /** Builds the timeline in one pass over time-sorted events. */
 export function buildTimeline(events: readonly TimedEvent[], endSec: number): Timeline {
-  const [comp, rosc, pulse, tube, advanced] = [0, 0, 0, 0, 0].map(() => new Toggle());
+  const [comp, tube, advanced] = [0, 0, 0].map(() => new Toggle());
   for (const e of events) {
     if (e.tSec > endSec) break;
-    stepCirculation(e, comp, rosc, pulse);
+    stepCompressions(e, comp);
     stepAirway(e, tube, advanced);
   }
-  for (const tg of [comp, rosc, pulse, tube, advanced]) tg.close(endSec);
-  const firstRosc = rosc.out.length ? rosc.out[0].startSec : endSec;
-  const window = firstRosc > 0 ? [{ startSec: 0, endSec: firstRosc }] : [];
+  for (const tg of [comp, tube, advanced]) tg.close(endSec);
+  const states = patientStates(events, endSec);
   return {
     endSec,
     compressions: comp.out,
-    rosc: rosc.out,
-    pulse: pulse.out,
-    noCirculation: subtract(window, pulse.out),
+    states,
+    rosc: intervalsOf(states, 'rosc'),
+    pulseless: intervalsOf(states, 'pulseless'),
     trachealTube: tube.out,
     advancedAirway: advanced.out,
   };

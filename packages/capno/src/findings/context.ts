@@ -54,6 +54,11 @@ export function finding(
 export const overlaps = (xs: readonly Interval[], s: number, e: number) =>
   xs.some((x) => x.startSec < e && x.endSec > s);
 
+/** Whether [s, e] lies wholly inside one pulseless interval (no ROSC or end in between). */
+export function pulselessThrough(tl: Timeline, s: number, e: number): boolean {
+  return tl.pulseless.some((x) => x.startSec <= s && x.endSec >= e);
+}
+
 /** Whether compressions are still going at the end of the record (an open interval). */
 export function compressionsRunningAtEnd(tl: Timeline): boolean {
   const last = tl.compressions[tl.compressions.length - 1];

@@ -17,7 +17,7 @@ function minIn(points: readonly Etco2Point[], iv: Interval): number {
 export function lowFindings(c: FindingContext): Finding[] {
   const low = mergeClose(c.segments.filter((s) => s.mmHg < c.t.lowEtco2MmHg));
   const out: Finding[] = [];
-  for (const iv of intersect(low, c.tl.compressions)) {
+  for (const iv of intersect(intersect(low, c.tl.compressions), c.tl.pulseless)) {
     const dur = iv.endSec - iv.startSec;
     if (dur < c.t.lowEtco2MinSec) continue;
     const lowest = minIn(c.points, { startSec: iv.startSec - MAX_HOLD_SEC, endSec: iv.endSec });

@@ -1,4 +1,4 @@
-import type { Finding } from '@upstroke/contracts';
+import type { Finding, Interval } from '@upstroke/contracts';
 import { epinephrineTimes } from '../events/normalize.js';
 import { classifyPause } from '../events/measures.js';
 import {
@@ -6,16 +6,15 @@ import {
   finding,
   fmt,
   overlaps,
+  pulselessThrough,
   type FindingContext,
 } from './context.js';
 
-/** In live use, compressions stopped and not restarted (no ROSC, pulse or end since): a pause in progress. */
+/** In live use, compressions stopped and not restarted while still pulseless: a pause in progress. */
 function ongoingPause(c: FindingContext) {
   const last = c.tl.compressions[c.tl.compressions.length - 1];
   if (!c.live || !last || last.endSec >= c.tl.endSec) return [];
-  const after = c.events.filter((e) => e.tSec >= last.endSec);
-  if (after.some((e) => ['rosc', 'end'].includes(e.kind) || (e.kind === 'pulse' && e.data.present)))
-    return [];
+  if (!pulselessThrough(c.tl, last.endSec, c.tl.endSec)) return [];
   return [classifyPause(c.events, last.endSec, c.tl.endSec)];
 }
 
@@ -43,60 +42,62 @@ export function pauseFindings(c: FindingContext): Finding[] {
   return out;
 }
 
-/** Points from which the next rhythm check is due: first compressions, each check, each restart after circulation. */
-function checkReferences(c: FindingContext): number[] {
+/**
+ * When the next rhythm check is due from, inside one pulseless interval: the first
+ * compressions in it and each rhythm check recorded in it.
+ */
+function checkReferences(c: FindingContext, p: Interval): number[] {
   const refs: number[] = [];
-  const circulation = [...c.tl.rosc, ...c.tl.pulse];
-  let seenCompressions = false;
-  for (const e of c.events) {
-    if (e.kind === 'rhythm') refs.push(e.tSec);
-    else if (e.kind === 'compressions-start') {
-      if (!seenCompressions || circulation.some((x) => x.endSec === e.tSec)) refs.push(e.tSec);
-      seenCompressions = true;
-    }
-  }
+  const cpr = c.tl.compressions.find((x) => x.endSec > p.startSec && x.startSec < p.endSec);
+  if (cpr) refs.push(Math.max(cpr.startSec, p.startSec));
+  for (const e of c.events)
+    if (e.kind === 'rhythm' && e.tSec >= p.startSec && e.tSec < p.endSec) refs.push(e.tSec);
   return refs.sort((a, b) => a - b);
 }
 
 /**
  * `rhythm-check-late`: more than `rhythmCheckIntervalSec` + tolerance from one rhythm check
- * (or the start of compressions) to the next, without circulation in between; an overdue
- * check at the end counts only while compressions are still running. Finding spans from
- * when the check was due to when it happened (or the end). Warning.
+ * (or the first compressions) to the next, judged in each pulseless interval (the arrest
+ * and each re-arrest), never across ROSC. ROSC found at the end of an interval counts as a
+ * check; an overdue check at the end of the record counts only while compressions are
+ * still running. The finding spans from when the check was due to when it happened (or
+ * the end). Warning.
  */
 export function rhythmCheckFindings(c: FindingContext): Finding[] {
   const out: Finding[] = [];
-  const refs = checkReferences(c);
-  const circulation = [...c.tl.rosc, ...c.tl.pulse];
   const limit = c.t.rhythmCheckIntervalSec + c.t.rhythmCheckToleranceSec;
-  for (let k = 0; k < refs.length; k++) {
-    const a = refs[k];
-    const open = k + 1 >= refs.length;
-    if (open && !compressionsRunningAtEnd(c.tl)) continue;
-    const b = open ? c.tl.endSec : refs[k + 1];
-    if (b < c.from || b - a <= limit || overlaps(circulation, a, b)) continue;
-    const msg = open
-      ? `No rhythm check recorded for ${fmt(b - a)} s (due every ${fmt(c.t.rhythmCheckIntervalSec)} s); consider whether a rhythm check is due.`
-      : `The rhythm check came ${fmt(b - a)} s after the previous one, later than the ${fmt(c.t.rhythmCheckIntervalSec)} s cycle plus ${fmt(c.t.rhythmCheckToleranceSec)} s tolerance.`;
-    out.push(finding('rhythm-check-late', a + c.t.rhythmCheckIntervalSec, b, 'warning', msg));
+  for (const p of c.tl.pulseless) {
+    const refs = checkReferences(c, p);
+    const byRosc = overlaps(c.tl.rosc, p.endSec, p.endSec + 1e-9);
+    if (refs.length && byRosc) refs.push(p.endSec);
+    for (let k = 0; k < refs.length; k++) {
+      const a = refs[k];
+      const open = k + 1 >= refs.length;
+      if (open && (byRosc || !compressionsRunningAtEnd(c.tl) || p.endSec < c.tl.endSec)) continue;
+      const b = open ? p.endSec : refs[k + 1];
+      if (b < c.from || b - a <= limit) continue;
+      const msg = open
+        ? `No rhythm check recorded for ${fmt(b - a)} s (due every ${fmt(c.t.rhythmCheckIntervalSec)} s); consider whether a rhythm check is due.`
+        : `The rhythm check came ${fmt(b - a)} s after the previous one, later than the ${fmt(c.t.rhythmCheckIntervalSec)} s cycle plus ${fmt(c.t.rhythmCheckToleranceSec)} s tolerance.`;
+      out.push(finding('rhythm-check-late', a + c.t.rhythmCheckIntervalSec, b, 'warning', msg));
+    }
   }
   return out;
 }
 
 /**
  * `epinephrine-interval`: an interval between doses shorter than `epinephrineMinSec` or
- * longer than `epinephrineMaxSec` (both without circulation in between), or no further
+ * longer than `epinephrineMaxSec` (both in one pulseless interval: never across ROSC), or no further
  * dose within `epinephrineMaxSec` while compressions continue at the end. Warning.
  */
 export function epinephrineFindings(c: FindingContext): Finding[] {
   const out: Finding[] = [];
   const ts = epinephrineTimes(c.events);
-  const circulation = [...c.tl.rosc, ...c.tl.pulse];
   const { epinephrineMinSec: min, epinephrineMaxSec: max } = c.t;
   const range = `${fmt(min / 60)}–${fmt(max / 60)} min`;
   for (let k = 1; k < ts.length; k++) {
     const [a, b] = [ts[k - 1], ts[k]];
-    if (b < c.from || (b - a >= min && b - a <= max) || overlaps(circulation, a, b)) continue;
+    if (b < c.from || (b - a >= min && b - a <= max) || !pulselessThrough(c.tl, a, b)) continue;
     const side = b - a < min ? 'shorter' : 'longer';
     const msg = `Epinephrine doses ${fmt(b - a)} s apart, ${side} than the ${range} interval of the protocol; consider reviewing the timing of doses.`;
     out.push(finding('epinephrine-interval', a, b, 'warning', msg));
@@ -104,7 +105,7 @@ export function epinephrineFindings(c: FindingContext): Finding[] {
   const last = ts[ts.length - 1];
   const end = c.tl.endSec;
   if (last !== undefined && end - last > max && compressionsRunningAtEnd(c.tl)) {
-    if (!overlaps(circulation, last, end)) {
+    if (pulselessThrough(c.tl, last, end)) {
       const msg = `No further epinephrine recorded ${fmt(end - last)} s after the last dose (protocol interval ${range}); consider whether a dose is due.`;
       out.push(finding('epinephrine-interval', last + max, end, 'warning', msg));
     }
