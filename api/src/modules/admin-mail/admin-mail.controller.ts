@@ -1,7 +1,7 @@
 import { Controller, Get, Param, ParseIntPipe, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { z } from 'zod';
-import { Roles } from '../../common/auth.decorators';
+import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
 import { ZodPipe } from '../../common/zod.pipe';
 import { AdminMailService } from './admin-mail.service';
 
@@ -19,12 +19,15 @@ export class AdminMailController {
   constructor(private readonly service: AdminMailService) {}
 
   @Get()
-  list(@Query(new ZodPipe(pageSchema)) page: z.infer<typeof pageSchema>) {
-    return this.service.overview(page.limit, page.offset);
+  list(
+    @CurrentUser() admin: AuthUser,
+    @Query(new ZodPipe(pageSchema)) page: z.infer<typeof pageSchema>,
+  ) {
+    return this.service.overview(admin, page.limit, page.offset);
   }
 
   @Get(':id')
-  get(@Param('id', ParseIntPipe) id: number) {
-    return this.service.message(id);
+  get(@CurrentUser() admin: AuthUser, @Param('id', ParseIntPipe) id: number) {
+    return this.service.message(admin, id);
   }
 }

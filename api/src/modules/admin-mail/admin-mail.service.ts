@@ -1,6 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import type { MailOverview, MailSinkMessage, MailSinkMessageDetail } from '@upstroke/contracts';
+import type { AuthUser } from '../../common/auth.decorators';
 import { notFound } from '../../common/errors';
+import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
 import { AdminMailRepository, type SinkRow } from './admin-mail.repository';
 import { plainTextOf } from './mime-text';
 
@@ -17,18 +19,23 @@ function toMessage(row: SinkRow): MailSinkMessage {
 
 @Injectable()
 export class AdminMailService {
-  constructor(private readonly mail: AdminMailRepository) {}
+  constructor(
+    private readonly mail: AdminMailRepository,
+    private readonly scope: AdminScopeRepository,
+  ) {}
 
-  async overview(limit: number, offset: number): Promise<MailOverview> {
+  async overview(admin: AuthUser, limit: number, offset: number): Promise<MailOverview> {
+    const scope = await this.scope.scopeOf(admin);
     const [sink, outbox] = await Promise.all([
-      this.mail.listSink(limit, offset),
-      this.mail.outboxCounts(),
+      this.mail.listSink(scope, limit, offset),
+      this.mail.outboxCounts(scope),
     ]);
     return { sink: { items: sink.items.map(toMessage), total: sink.total }, outbox };
   }
 
-  async message(id: number): Promise<MailSinkMessageDetail> {
-    const row = await this.mail.findSink(id);
+  /** A message to someone this admin does not manage is not found, like a missing one. */
+  async message(admin: AuthUser, id: number): Promise<MailSinkMessageDetail> {
+    const row = await this.mail.findSink(await this.scope.scopeOf(admin), id);
     if (!row) throw notFound('Message');
     return { ...toMessage(row), text: plainTextOf(row.raw) };
   }

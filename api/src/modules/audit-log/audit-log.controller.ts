@@ -1,7 +1,7 @@
 import { Controller, Get, Header, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { type AuditEntry, type AuditQuery, auditQuerySchema, type List } from '@upstroke/contracts';
-import { Roles } from '../../common/auth.decorators';
+import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
 import { ZodPipe } from '../../common/zod.pipe';
 import { AuditLogService } from './audit-log.service';
 
@@ -16,17 +16,21 @@ export class AuditLogController {
   constructor(private readonly service: AuditLogService) {}
 
   @Get()
-  list(@Query(new ZodPipe(auditQuerySchema)) query: AuditQuery): Promise<List<AuditEntry>> {
-    return this.service.list(query);
+  list(
+    @CurrentUser() admin: AuthUser,
+    @Query(new ZodPipe(auditQuerySchema)) query: AuditQuery,
+  ): Promise<List<AuditEntry>> {
+    return this.service.list(admin, query);
   }
 
   @Get('export.csv')
   @Header('Content-Type', 'text/csv; charset=utf-8')
   @Header('Content-Disposition', 'attachment; filename="upstroke-audit.csv"')
   exportCsv(
+    @CurrentUser() admin: AuthUser,
     @Query(new ZodPipe(exportQuerySchema)) query: Omit<AuditQuery, 'limit' | 'offset'>,
   ): Promise<string> {
-    return this.service.exportCsv(query);
+    return this.service.exportCsv(admin, query);
   }
 
   @Get('vocabulary')

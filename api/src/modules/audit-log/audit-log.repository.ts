@@ -2,6 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import type { AuditQuery } from '@upstroke/contracts';
 import type { Knex } from 'knex';
 import { KNEX, type Db } from '../../db/knex';
+import type { AdminScope } from '../admin-scope/admin-scope.repository';
 
 export interface AuditRow {
   id: number;
@@ -24,8 +25,32 @@ export type AuditFilter = Omit<AuditQuery, 'limit' | 'offset'>;
 export class AuditLogRepository {
   constructor(@Inject(KNEX) private readonly db: Db) {}
 
-  private filtered(filter: AuditFilter): Knex.QueryBuilder {
+  /**
+   * What concerns a scoped admin's sites: entries about records of those sites, about those
+   * sites and their protocol profiles, and about users they manage.
+   */
+  private concerns(q: Knex.QueryBuilder, sites: string[]): void {
+    q.where((w) =>
+      w
+        .whereIn(
+          'a.resuscitationId',
+          this.db('resuscitations').whereIn('siteId', sites).select('id'),
+        )
+        .orWhereRaw(`a.entity = 'site' and a.entity_id = any(?::text[])`, [sites])
+        .orWhereRaw(`a.entity = 'protocol-profile' and a.details->>'siteId' = any(?::text[])`, [
+          sites,
+        ])
+        .orWhereRaw(
+          `a.entity = 'user' and a.entity_id in (select user_id::text from user_sites
+             group by user_id having bool_and(site_id = any(?::uuid[])))`,
+          [sites],
+        ),
+    );
+  }
+
+  private filtered(filter: AuditFilter, scope: AdminScope): Knex.QueryBuilder {
     const q = this.db('auditLog as a').leftJoin('users as u', 'u.id', 'a.userId');
+    if (!scope.organisationWide) this.concerns(q, scope.siteIds);
     if (filter.userId) q.where('a.userId', filter.userId);
     if (filter.action) q.where('a.action', filter.action);
     if (filter.entity) q.where('a.entity', filter.entity);
@@ -39,8 +64,9 @@ export class AuditLogRepository {
     filter: AuditFilter,
     limit: number,
     offset: number,
+    scope: AdminScope,
   ): Promise<{ items: AuditRow[]; total: number }> {
-    const q = this.filtered(filter);
+    const q = this.filtered(filter, scope);
     const [{ count }] = await q.clone().count<{ count: number }[]>({ count: '*' });
     const items = await q
       .orderBy([

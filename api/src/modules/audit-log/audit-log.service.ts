@@ -1,5 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { AuditEntry, AuditQuery, List } from '@upstroke/contracts';
+import type { AuthUser } from '../../common/auth.decorators';
+import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
 import { auditCsv } from './audit-csv';
 import { type AuditFilter, AuditLogRepository, type AuditRow } from './audit-log.repository';
 
@@ -12,16 +14,21 @@ function toEntry(row: AuditRow): AuditEntry {
 
 @Injectable()
 export class AuditLogService {
-  constructor(private readonly log: AuditLogRepository) {}
+  constructor(
+    private readonly log: AuditLogRepository,
+    private readonly scope: AdminScopeRepository,
+  ) {}
 
-  async list(query: AuditQuery): Promise<List<AuditEntry>> {
+  async list(admin: AuthUser, query: AuditQuery): Promise<List<AuditEntry>> {
     const { limit, offset, ...filter } = query;
-    const { items, total } = await this.log.list(filter, limit, offset);
+    const scope = await this.scope.scopeOf(admin);
+    const { items, total } = await this.log.list(filter, limit, offset, scope);
     return { items: items.map(toEntry), total };
   }
 
-  async exportCsv(filter: AuditFilter): Promise<string> {
-    const { items } = await this.log.list(filter, exportLimit, 0);
+  async exportCsv(admin: AuthUser, filter: AuditFilter): Promise<string> {
+    const scope = await this.scope.scopeOf(admin);
+    const { items } = await this.log.list(filter, exportLimit, 0, scope);
     return auditCsv(items.map(toEntry));
   }
 

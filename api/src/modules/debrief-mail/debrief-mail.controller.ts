@@ -4,6 +4,7 @@ import { type SendDebriefEmail, sendDebriefEmailSchema } from '@upstroke/contrac
 import { z } from 'zod';
 import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
 import { ZodPipe } from '../../common/zod.pipe';
+import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
 import { DebriefMailService } from './debrief-mail.service';
 import { OutboxRepository } from './outbox.repository';
 
@@ -20,6 +21,7 @@ export class DebriefMailController {
   constructor(
     private readonly service: DebriefMailService,
     private readonly outbox: OutboxRepository,
+    private readonly scope: AdminScopeRepository,
   ) {}
 
   @Roles('lead')
@@ -36,8 +38,12 @@ export class DebriefMailController {
   /** The delivery queue, newest first, without bodies or attachments (admins). */
   @Roles('admin')
   @Get('mail/outbox')
-  async list(@Query(new ZodPipe(pageSchema)) page: z.infer<typeof pageSchema>) {
-    const { items, total } = await this.outbox.list(page.limit, page.offset);
+  async list(
+    @CurrentUser() admin: AuthUser,
+    @Query(new ZodPipe(pageSchema)) page: z.infer<typeof pageSchema>,
+  ) {
+    const scope = await this.scope.scopeOf(admin);
+    const { items, total } = await this.outbox.list(scope, page.limit, page.offset);
     return {
       items: items.map((r) => ({
         ...r,

@@ -1,5 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { KNEX, type Db } from '../../db/knex';
+import { type AdminScope, scopeOutbox } from '../admin-scope/admin-scope.repository';
 
 export interface OutboxRow {
   id: string;
@@ -39,9 +40,11 @@ const listColumns = [
 export class OutboxRepository {
   constructor(@Inject(KNEX) private readonly db: Db) {}
 
-  async list(limit: number, offset: number) {
-    const [{ count }] = await this.db('mailOutbox').count<{ count: number }[]>({ count: '*' });
-    const items = await this.db('mailOutbox')
+  /** The queue as `scope` may see it (see `scopeOutbox`). */
+  async list(scope: AdminScope, limit: number, offset: number) {
+    const scoped = () => scopeOutbox(this.db, this.db('mailOutbox'), scope);
+    const [{ count }] = await scoped().count<{ count: number }[]>({ count: '*' });
+    const items = await scoped()
       .orderBy('createdAt', 'desc')
       .limit(limit)
       .offset(offset)

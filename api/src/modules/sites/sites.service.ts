@@ -11,6 +11,7 @@ import {
 import { type AuthUser, canSeeSite } from '../../common/auth.decorators';
 import { conflict, notFound } from '../../common/errors';
 import type { Db } from '../../db/knex';
+import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
 import { AuditRepository } from '../audit/audit.repository';
 import { ProfilesService } from '../profiles/profiles.service';
 import { UsersRepository } from '../users/users.repository';
@@ -27,6 +28,7 @@ export class SitesService {
     private readonly users: UsersRepository,
     private readonly profiles: ProfilesService,
     private readonly audit: AuditRepository,
+    private readonly scope: AdminScopeRepository,
   ) {}
 
   async list(admin: AuthUser): Promise<List<Site>> {
@@ -53,18 +55,23 @@ export class SitesService {
     return site;
   }
 
-  /** A new site starts with guideline defaults as profile v1, and its creator as a member. */
+  /**
+   * A new site starts with guideline defaults as profile v1, its creator as a member, and
+   * every organisation-wide admin as a member (so they stay organisation-wide).
+   */
   async create(admin: AuthUser, body: CreateSite, deviceId?: string): Promise<Site> {
     if (await this.sites.findByName(body.name)) throw nameTaken();
     const id = randomUUID();
     const unitNames = [...new Map((body.units ?? []).map((n) => [n.toLowerCase(), n])).values()];
     await this.sites.inTransaction(async (trx) => {
+      const organisationAdmins = await this.scope.organisationAdminIds(trx);
       await this.sites.insert(
         { id, name: body.name, etco2Unit: body.etco2Unit, paperSize: body.paperSize },
         trx,
       );
       for (const name of unitNames) await this.sites.insertUnit(id, name, trx);
-      await this.users.addSite(admin.id, id, trx);
+      for (const userId of new Set([admin.id, ...organisationAdmins]))
+        await this.users.addSite(userId, id, trx);
       await this.record(
         admin,
         'site.create',

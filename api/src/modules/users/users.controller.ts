@@ -22,8 +22,8 @@ export class UsersController {
   constructor(private readonly service: UsersService) {}
 
   @Get()
-  list(): Promise<List<AdminUser>> {
-    return this.service.list();
+  list(@CurrentUser() admin: AuthUser): Promise<List<AdminUser>> {
+    return this.service.list(admin);
   }
 
   /** Creates the account and e-mails a one-time link to set its password. */

@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { AdminScopeModule } from '../admin-scope/admin-scope.module';
 import { InvitationsRepository } from './invitations.repository';
 import { InvitationsService } from './invitations.service';
 import { SetPasswordController } from './set-password.controller';
@@ -7,6 +8,7 @@ import { UsersRepository } from './users.repository';
 import { UsersService } from './users.service';
 
 @Module({
+  imports: [AdminScopeModule],
   controllers: [UsersController, SetPasswordController],
   providers: [UsersRepository, InvitationsRepository, InvitationsService, UsersService],
   exports: [UsersRepository],

@@ -1,6 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Role } from '@upstroke/contracts';
 import { KNEX, type Db } from '../../db/knex';
+import { managedUserIds } from '../admin-scope/admin-scope.repository';
 
 export interface UserRow {
   id: string;
@@ -32,9 +33,11 @@ export class UsersRepository {
     return (trx ?? this.db)<UserRow>('users').whereRaw('lower(email) = lower(?)', [email]).first();
   }
 
-  async findWithSites(id: string, trx?: Db): Promise<UserWithSites | undefined> {
+  /** With `lock` (inside a transaction) the user's row stays locked until it ends. */
+  async findWithSites(id: string, trx?: Db, lock = false): Promise<UserWithSites | undefined> {
     const db = trx ?? this.db;
-    const user = await db<UserRow>('users').where({ id }).first();
+    const q = db<UserRow>('users').where({ id });
+    const user = await (lock ? q.forUpdate() : q).first();
     if (!user) return undefined;
     const sites = await db('userSites')
       .where({ userId: id })
@@ -42,8 +45,11 @@ export class UsersRepository {
     return { ...user, siteIds: sites.map((s) => s.siteId) };
   }
 
-  async listWithSites(): Promise<UserWithSites[]> {
-    const users = await this.db<UserRow>('users').orderBy([
+  /** Every user, or with `managedBy` only those whose sites all lie within those sites. */
+  async listWithSites(managedBy?: string[]): Promise<UserWithSites[]> {
+    const q = this.db<UserRow>('users');
+    if (managedBy) q.whereIn('id', managedUserIds(this.db, managedBy));
+    const users = await q.orderBy([
       { column: 'active', order: 'desc' },
       { column: 'name', order: 'asc' },
     ]);

@@ -4,6 +4,7 @@ import type { AdminUser, InviteUser, List, UpdateUser } from '@upstroke/contract
 import type { AuthUser } from '../../common/auth.decorators';
 import { conflict, forbidden, notFound } from '../../common/errors';
 import type { Db } from '../../db/knex';
+import { AdminScopeRepository, managesUser } from '../admin-scope/admin-scope.repository';
 import { AuditRepository } from '../audit/audit.repository';
 import { InvitationsService } from './invitations.service';
 import { type UserChanges, type UserWithSites, UsersRepository } from './users.repository';
@@ -36,10 +37,25 @@ export class UsersService {
     private readonly users: UsersRepository,
     private readonly invitations: InvitationsService,
     private readonly audit: AuditRepository,
+    private readonly scope: AdminScopeRepository,
   ) {}
 
-  async list(): Promise<List<AdminUser>> {
-    const users = await this.users.listWithSites();
+  /** The user, locked for this transaction, if this admin manages them (else not found). */
+  private async managedUser(admin: AuthUser, id: string, trx: Db): Promise<UserWithSites> {
+    const [user, scope] = await Promise.all([
+      this.users.findWithSites(id, trx, true),
+      this.scope.scopeOf(admin, trx),
+    ]);
+    // Someone else's user is as invisible here as in the list.
+    if (!user || !managesUser(scope, user.siteIds)) throw notFound('User');
+    return user;
+  }
+
+  async list(admin: AuthUser): Promise<List<AdminUser>> {
+    const scope = await this.scope.scopeOf(admin);
+    const users = await this.users.listWithSites(
+      scope.organisationWide ? undefined : scope.siteIds,
+    );
     return { items: users.map(toAdminUser), total: users.length };
   }
 
@@ -80,8 +96,7 @@ export class UsersService {
   ): Promise<AdminUser> {
     if (patch.siteIds) assertManagesSites(admin, patch.siteIds);
     await this.users.inTransaction(async (trx) => {
-      const user = await this.users.findWithSites(id, trx);
-      if (!user) throw notFound('User');
+      const user = await this.managedUser(admin, id, trx);
       const losesAdmin =
         user.role === 'admin' &&
         user.active &&
@@ -94,11 +109,8 @@ export class UsersService {
       // A new role or a deactivation must not ride on tokens issued before it.
       const revoke = changes.role !== undefined || changes.active === false;
       await this.users.update(id, changes, revoke, trx);
-      if (patch.siteIds) {
-        // Sites this admin does not manage are kept as they were.
-        const kept = user.siteIds.filter((s) => !admin.siteIds.includes(s));
-        await this.users.replaceSites(id, [...new Set([...kept, ...patch.siteIds])], trx);
-      }
+      // A managed user has no site outside this admin's, so the new list replaces the old.
+      if (patch.siteIds) await this.users.replaceSites(id, [...new Set(patch.siteIds)], trx);
       await this.record(
         admin,
         'user.update',
@@ -114,8 +126,7 @@ export class UsersService {
   /** Clears the password, signs the user out everywhere and sends a new one-time link. */
   async resetPassword(admin: AuthUser, id: string, deviceId?: string): Promise<AdminUser> {
     await this.users.inTransaction(async (trx) => {
-      const user = await this.users.findWithSites(id, trx);
-      if (!user) throw notFound('User');
+      const user = await this.managedUser(admin, id, trx);
       if (!user.active) throw conflict('This user is deactivated: reactivate them first');
       await this.users.update(id, { passwordHash: null }, true, trx);
       await this.record(admin, 'user.reset-password', id, {}, deviceId, trx);
