@@ -6,7 +6,7 @@
  */
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { composeDebrief } from '../api/src/modules/debrief/compose-debrief';
+import { composeDebrief } from '@upstroke/capno';
 import { renderReportPdf } from '../api/src/modules/exports/pdf/report-pdf';
 import { longRecordParts } from './support/long-record';
 
@@ -15,7 +15,7 @@ const RESULTS = resolve(__dirname, 'results.json');
 async function main() {
   const parts = longRecordParts(60, 400);
   const t0 = performance.now();
-  const { debrief } = composeDebrief(parts);
+  const { debrief } = composeDebrief(parts.stored, parts.header);
   const analyzeMs = performance.now() - t0;
   const opts = { version: 'bench', generatedAt: new Date('2026-03-04T12:00:00Z'), timeZone: 'UTC' };
   await renderReportPdf(debrief, opts); // warm-up: fonts read and parsed once per process
@@ -35,9 +35,9 @@ async function main() {
     node: process.version,
     record: {
       minutes: 60,
-      events: parts.events.length,
-      etco2Values: parts.etco2.length,
-      waveformSamples: parts.chunks.reduce((n, c) => n + c.sampleCount, 0),
+      events: parts.stored.events.length,
+      etco2Values: parts.stored.etco2.length,
+      waveformSamples: (parts.stored.waveform ?? []).reduce((n, c) => n + c.values.length, 0),
       findings: debrief.findings.length,
     },
     composeDebriefMs: Math.round(analyzeMs),

@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { createKnex, type Db } from '../src/db/knex';
+import { ClinicalDataRepository } from '../src/modules/resuscitations/clinical-data.repository';
 import { SummariesRepository } from '../src/modules/summaries/summaries.repository';
 import { SummariesService } from '../src/modules/summaries/summaries.service';
 import { aResuscitation, anEtco2, anEvent } from './factories';
@@ -45,7 +46,10 @@ async function storeRecord(t: TestDb, overrides: Record<string, unknown> = {}) {
 describe('per-record summary rows', () => {
   // The service alone on the test database: no HTTP routes of its own to go through.
   const t: TestDb = { db: createKnex(process.env.DATABASE_URL as string) };
-  const service = new SummariesService(new SummariesRepository(t.db));
+  const service = new SummariesService(
+    new ClinicalDataRepository(t.db),
+    new SummariesRepository(t.db),
+  );
   beforeAll(() => resetDatabase(t.db));
   afterAll(() => t.db.destroy());
 

@@ -1,27 +1,25 @@
 import { randomUUID } from 'node:crypto';
-import { synthCapnogram } from '@upstroke/capno';
+import {
+  type DebriefHeader,
+  type StoredEvent,
+  type StoredRecord,
+  type StoredWaveformChunk,
+  synthCapnogram,
+} from '@upstroke/capno';
 import type { Debrief } from '@upstroke/contracts';
-import type { DebriefParts } from '../../api/src/modules/debrief/compose-debrief';
 
 const ARREST = Date.parse('2026-03-04T10:00:00.000Z');
 const at = (sec: number) => new Date(ARREST + sec * 1000);
 
 /** An invented 60-minute code with `count` events, EtCO2 every 30 s and a 50 Hz capnogram. */
-export function longRecordParts(minutes = 60, count = 400): DebriefParts {
+export function longRecordParts(
+  minutes = 60,
+  count = 400,
+): { stored: StoredRecord; header: DebriefHeader } {
   const rid = randomUUID();
-  const events: DebriefParts['events'] = [];
+  const events: StoredEvent[] = [];
   const push = (sec: number, kind: string, data: Record<string, unknown> = {}) =>
-    events.push({
-      id: randomUUID(),
-      resuscitationId: rid,
-      at: at(sec),
-      kind: kind as never,
-      data,
-      recordedBy: null,
-      deviceId: null,
-      amendment: false,
-      receivedAt: at(sec),
-    });
+    events.push({ id: randomUUID(), at: at(sec).toISOString(), kind, data, recordedBy: null });
   push(0, 'arrest', { witnessed: true, monitored: true });
   push(8, 'compressions-start');
   const cycles = Math.floor((minutes * 60) / 120);
@@ -39,17 +37,13 @@ export function longRecordParts(minutes = 60, count = 400): DebriefParts {
     push(30 + ((i * 37) % (minutes * 60 - 60)), 'note', {
       text: `Team note ${i + 1}: compressor changed, depth checked`,
     });
-  events.sort((a, b) => a.at.getTime() - b.at.getTime());
+  events.sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
   push(minutes * 60, 'end', { reason: 'terminated' });
   const etco2 = Array.from({ length: minutes * 2 }, (_, i) => ({
-    id: randomUUID(),
-    resuscitationId: rid,
-    at: at(15 + i * 30),
+    at: at(15 + i * 30).toISOString(),
     value: 8 + ((i * 7) % 15),
     unit: 'mmHg' as const,
-    valueMmhg: 8 + ((i * 7) % 15),
-    source: 'manual' as const,
-    deviceId: null,
+    source: 'manual',
   }));
   const rate = 50;
   const s = synthCapnogram({
@@ -62,18 +56,13 @@ export function longRecordParts(minutes = 60, count = 400): DebriefParts {
     ],
     compressions: [[0, minutes * 60]],
   });
-  const chunks: DebriefParts['chunks'] = [];
+  const chunks: StoredWaveformChunk[] = [];
   for (let k = 0; k < s.values.length; k += rate * 10) {
-    const part = Float32Array.from(s.values.slice(k, k + rate * 10));
     chunks.push({
-      id: randomUUID(),
-      resuscitationId: rid,
-      startAt: at(k / rate),
+      startAt: at(k / rate).toISOString(),
       sampleRateHz: rate,
       unit: 'mmHg',
-      seq: chunks.length,
-      sampleCount: part.length,
-      samples: Buffer.from(part.buffer),
+      values: Float32Array.from(s.values.slice(k, k + rate * 10)),
       source: 'stream',
     });
   }
@@ -114,8 +103,17 @@ export function longRecordParts(minutes = 60, count = 400): DebriefParts {
       eventIds: [],
       createdBy: 'bench',
       createdByName: 'Lead (bench)',
-      createdAt: at(minutes * 60 + 3600),
+      createdAt: at(minutes * 60 + 3600).toISOString(),
     },
   ];
-  return { record, profile: undefined, events, etco2, chunks, amendments };
+  const stored: StoredRecord = {
+    id: rid,
+    siteId: record.siteId,
+    unitId: null,
+    arrestAt: record.arrestAt,
+    events,
+    etco2,
+    waveform: chunks,
+  };
+  return { stored, header: { record, amendments, computedBy: 'server' } };
 }

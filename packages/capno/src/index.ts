@@ -37,12 +37,6 @@ export { CAUTION } from './findings/index.js';
 export { LiveAnalyzer, type LiveOptions } from './live/live-analyzer.js';
 export { resolveThresholds } from './profile.js';
 export { summarize } from './summary.js';
-export {
-  buildSummaryRow,
-  joinWaveform,
-  storedRecordInput,
-  type StoredRecord,
-  type StoredWaveformChunk,
-} from './summary-row.js';
+export * from './debrief/index.js';
 export { arrayToMmHg, DEFAULT_BAROMETRIC_MMHG, MMHG_PER_KPA, mmHgFactor, toMmHg } from './units.js';
 export * from './synth.js';

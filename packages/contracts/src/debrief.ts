@@ -5,6 +5,7 @@ import { isoDateTimeSchema, uuidSchema } from './common.js';
 import { eventKindSchema } from './events.js';
 import { thresholdsSchema } from './profile.js';
 import { patchResuscitationSchema, resuscitationSchema } from './resuscitations.js';
+import { timelineModelSchema } from './timeline.js';
 
 /** One stored event as the debrief and the chart record show it (corrections visible). */
 export const debriefEventSchema = z.object({
@@ -75,6 +76,7 @@ export const debriefProfileSchema = z.object({
   name: z.string(),
   thresholds: thresholdsSchema,
 });
+export type DebriefProfile = z.infer<typeof debriefProfileSchema>;
 
 /** A capnogram reduced for drawing: min/max per bucket keeps every breath's peak visible. */
 export const waveformTraceSchema = z.object({
@@ -92,6 +94,8 @@ export const debriefSchema = analysisOutputSchema.extend({
   waveformTrace: waveformTraceSchema.nullable(),
   events: z.array(debriefEventSchema),
   amendments: z.array(amendmentSchema),
+  /** What every drawing of the timeline reads (capno's `composeDebrief`). */
+  timeline: timelineModelSchema,
   /** Where the analysis ran: the server, or this tablet from its own store (offline). */
   computedBy: z.enum(['server', 'device']),
 });

@@ -6,6 +6,7 @@ export * from './analysis.js';
 export * from './resuscitations.js';
 export * from './site-context.js';
 export * from './quality.js';
+export * from './timeline.js';
 export * from './debrief.js';
 export * from './admin.js';
 export * from './monitor.js';

@@ -11,13 +11,6 @@ export interface RecordContext {
   signedByName: string | null;
 }
 
-export interface ProfileRow {
-  id: string;
-  version: number;
-  name: string;
-  thresholds: Record<string, unknown>;
-}
-
 export interface AmendmentRow {
   id: string;
   resuscitationId: string;
@@ -73,21 +66,6 @@ export class DebriefRepository {
       .whereIn('id', wanted)
       .select<{ id: string; name: string }[]>('id', 'name');
     return new Map(rows.map((r) => [r.id, r.name]));
-  }
-
-  /** The profile version the record references, else the site's latest. */
-  async profile(profileId: string | null, siteId: string): Promise<ProfileRow | undefined> {
-    const cols = ['id', 'version', 'name', 'thresholds'];
-    if (profileId) {
-      const row = await this.db('protocolProfiles')
-        .where({ id: profileId })
-        .first<ProfileRow>(cols);
-      if (row) return row;
-    }
-    return this.db('protocolProfiles')
-      .where({ siteId })
-      .orderBy('version', 'desc')
-      .first<ProfileRow>(cols);
   }
 
   async amendments(resuscitationId: string): Promise<AmendmentRow[]> {

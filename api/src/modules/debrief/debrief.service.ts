@@ -1,14 +1,15 @@
 import { Injectable } from '@nestjs/common';
+import { composeDebrief } from '@upstroke/capno';
 import type { Debrief, Waveform } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
+import { notFound } from '../../common/errors';
 import { ClinicalDataRepository } from '../resuscitations/clinical-data.repository';
 import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
 import type { ResuscitationRow } from '../resuscitations/resuscitations.repository';
 import { toResuscitation } from '../resuscitations/resuscitations.service';
-import { composeDebrief } from './compose-debrief';
 import { DebriefRepository } from './debrief.repository';
 
-/** Loads a record's rows and its protocol profile version, then composes the debrief. */
+/** Loads the stored record (one loader) and its header; capno composes the debrief. */
 @Injectable()
 export class DebriefService {
   constructor(
@@ -30,23 +31,17 @@ export class DebriefService {
   }
 
   async build(record: ResuscitationRow): Promise<{ debrief: Debrief; waveform?: Waveform }> {
-    const id = record.id;
-    const [events, etco2, chunks, context, profile, amendments] = await Promise.all([
-      this.data.events(id),
-      this.data.etco2(id),
-      this.data.waveformChunks(id),
+    const [stored, context, amendments] = await Promise.all([
+      this.data.loadStored(record.id),
       this.repo.context(record),
-      this.repo.profile(record.profileId, record.siteId),
-      this.repo.amendments(id),
+      this.repo.amendments(record.id),
     ]);
+    if (!stored) throw notFound('Resuscitation');
     const { profileId: _profileId, ...header } = toResuscitation(record);
-    return composeDebrief({
+    return composeDebrief(stored, {
       record: { ...header, ...context },
-      profile,
-      events,
-      etco2,
-      chunks,
-      amendments,
+      amendments: amendments.map((a) => ({ ...a, createdAt: a.createdAt.toISOString() })),
+      computedBy: 'server',
     });
   }
 }

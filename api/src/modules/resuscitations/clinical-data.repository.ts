@@ -1,7 +1,15 @@
 import { Inject, Injectable } from '@nestjs/common';
+import type { StoredProfile, StoredRecord } from '@upstroke/capno';
 import type { Co2Unit, Etco2Source, EventKind } from '@upstroke/contracts';
 import type { Knex } from 'knex';
 import { KNEX, type Db } from '../../db/knex';
+import {
+  type RecordRow,
+  type StoredChunkRow,
+  type StoredEtco2Row,
+  type StoredEventRow,
+  toStoredRecord,
+} from './stored-rows';
 
 export interface EventRow {
   id: string;
@@ -12,6 +20,7 @@ export interface EventRow {
   recordedBy: string | null;
   deviceId: string | null;
   amendment: boolean;
+  amendmentId: string | null;
   receivedAt: Date;
 }
 
@@ -24,18 +33,6 @@ export interface Etco2Row {
   valueMmhg: number;
   source: Etco2Source;
   deviceId: string | null;
-}
-
-export interface WaveformChunkRow {
-  id: string;
-  resuscitationId: string;
-  startAt: Date;
-  sampleRateHz: number;
-  unit: Co2Unit;
-  seq: number | null;
-  sampleCount: number;
-  samples: Buffer;
-  source: string;
 }
 
 /** Events, EtCO2 values and waveform chunks: append-only, idempotent on their ids. */
@@ -117,9 +114,81 @@ export class ClinicalDataRepository {
     return { serverTime: now.rows[0].now, events, etco2 };
   }
 
-  async waveformChunks(resuscitationId: string): Promise<WaveformChunkRow[]> {
-    return this.db<WaveformChunkRow>('waveformChunks')
-      .where({ resuscitationId })
-      .orderBy('startAt');
+  /**
+   * A record as stored, with everything every output is composed from: its events (with
+   * their amendment), EtCO2 values, capnogram chunks (decoded) and the protocol profile
+   * version in force. The one loader for the debrief, the exports and the committee's row.
+   */
+  async loadStored(id: string, trx?: Db): Promise<StoredRecord | undefined> {
+    const q = trx ?? this.db;
+    const record = await q('resuscitations')
+      .where({ id })
+      .first<RecordRow | undefined>(
+        'id',
+        'siteId',
+        'unitId',
+        'arrestAt',
+        'ageGroup',
+        'weightKg',
+        'witnessed',
+        'monitored',
+        'firstRhythm',
+        'outcome',
+        'profileId',
+      );
+    if (!record) return undefined;
+    const where = { resuscitationId: id };
+    const [events, etco2, chunks, profile] = await Promise.all([
+      q('resuscitationEvents')
+        .where(where)
+        .orderBy([{ column: 'at' }, { column: 'receivedAt' }])
+        .select<StoredEventRow[]>(
+          'id',
+          'at',
+          'kind',
+          'data',
+          'recordedBy',
+          'amendment',
+          'amendmentId',
+        ),
+      q('etco2Samples')
+        .where(where)
+        .orderBy('at')
+        .select<StoredEtco2Row[]>('at', 'value', 'unit', 'source'),
+      q('waveformChunks')
+        .where(where)
+        .orderBy('startAt')
+        .select<StoredChunkRow[]>(
+          'startAt',
+          'sampleRateHz',
+          'unit',
+          'source',
+          'sampleCount',
+          'samples',
+        ),
+      this.profileInForce(q, record.profileId, record.siteId),
+    ]);
+    return toStoredRecord(record, { events, etco2, chunks, profile });
+  }
+
+  /**
+   * The profile version the record was recorded under; a record without one (or whose
+   * version is gone) reads its site's latest. Its values are checked by capno on use.
+   */
+  private async profileInForce(
+    q: Db,
+    profileId: string | null,
+    siteId: string,
+  ): Promise<StoredProfile | null> {
+    const cols = ['id', 'version', 'name', 'thresholds'];
+    const own = profileId
+      ? await q('protocolProfiles').where({ id: profileId }).first<StoredProfile | undefined>(cols)
+      : undefined;
+    if (own) return own;
+    const latest = await q('protocolProfiles')
+      .where({ siteId })
+      .orderBy('version', 'desc')
+      .first<StoredProfile | undefined>(cols);
+    return latest ?? null;
   }
 }

@@ -41,5 +41,7 @@ describe('eventsInForce (the correction rule for screens and exports)', () => {
       ev('u2', 97, 'correction', { supersedes: 'u1' }),
     ];
     expect(eventsInForce(events).map((e) => e.id)).toEqual(['r']);
+    // The same rule for the event list: the undone correction supersedes nothing.
+    expect(supersededByMap(events)).toEqual(new Map([['u1', 'u2']]));
   });
 });

@@ -95,12 +95,15 @@ export function eventsInForce<E extends CorrectableEvent>(events: readonly E[]):
     .map((x) => x.e);
 }
 
-/** For each superseded event, the correction that superseded it (id → correction id). */
-export function supersededByMap(
-  events: readonly Pick<CorrectableEvent, 'id' | 'kind' | 'data'>[],
-): Map<string, string> {
+/**
+ * For each superseded event, the correction in force that superseded it (id → correction
+ * id), by the same rule as `eventsInForce`: a correction that was itself undone supersedes
+ * nothing (it is listed as superseded by the correction that undid it).
+ */
+export function supersededByMap(events: readonly CorrectableEvent[]): Map<string, string> {
   const map = new Map<string, string>();
-  for (const e of events) if (e.kind === 'correction') map.set(correctionData(e).supersedes, e.id);
+  for (const c of activeCorrections(events.filter((e) => e.kind === 'correction')))
+    map.set(correctionData(c).supersedes, c.id);
   return map;
 }
 

@@ -18,6 +18,7 @@ export {
   updateResuscitation,
 } from './record';
 export { startSync, syncEngine } from './engine-instance';
+export { type LocalRecord, storedFromLocal } from './stored-record';
 export { useSyncState, type SyncState } from './use-sync-state';
 export { useRemoteEntries } from './use-remote-entries';
 export {

@@ -6,6 +6,7 @@ export const colors = {
   rule: '#c9ced6',
   band: '#e3f1e6',
   low: '#f6d5d2',
+  gap: '#e4e6ea',
   lowEdge: '#c0392b',
   rise: '#1f6fb2',
   etco2: '#0b5c8a',

@@ -1,24 +1,17 @@
-import { type Debrief, type DebriefEvent, eventMarkerCodes } from '@upstroke/contracts';
+import type { Debrief, TimelineMarker } from '@upstroke/contracts';
 import { colors, type Layout } from './layout';
 
 const legend =
   'CA arrest · S shock · D drug (E = epinephrine) · A airway · V ventilation · R rhythm · P pulse · ROSC · RA re-arrest · IV access · ticks: notes';
 
-function code(e: DebriefEvent): string {
-  if (e.kind === 'drug' && e.data.drug === 'epinephrine') return 'E';
-  return eventMarkerCodes[e.kind] ?? '';
-}
-
-function tickStep(durationSec: number): number {
-  const min = durationSec / 60;
-  return [1, 2, 5, 10, 15, 30, 60].find((s) => min / s <= 12) ?? 120;
-}
-
-/** The record on one vector chart: EtCO2, capnogram, compressions, flagged intervals, events. */
+/**
+ * The record on one vector chart: EtCO2, capnogram, compressions, flagged intervals, data
+ * gaps and events — all placed by the debrief's timeline model (capno), as on the screen.
+ */
 export function drawTimeline(l: Layout, d: Debrief): void {
   const doc = l.doc;
-  const lastEvent = Math.max(0, ...d.events.map((e) => e.tSec));
-  const duration = Math.max(60, d.measures.durationSec, lastEvent);
+  const tl = d.timeline;
+  const duration = tl.span.endSec;
   const maxV = Math.max(40, ...d.etco2Series.map((p) => p.mmHg), ...(d.waveformTrace?.mmHg ?? [0]));
   const yMax = Math.min(100, Math.ceil(maxV / 10) * 10);
   const lane = 46;
@@ -30,10 +23,10 @@ export function drawTimeline(l: Layout, d: Debrief): void {
   const X = (t: number) => x0 + (Math.max(0, Math.min(duration, t)) / duration) * w;
   const Y = (v: number) => top + plotH - (Math.max(0, Math.min(yMax, v)) / yMax) * plotH;
 
-  for (const c of d.measures.compressionIntervals ?? [])
-    doc.rect(X(c.startSec), top, X(c.endSec) - X(c.startSec), plotH).fill(colors.band);
-  for (const f of d.findings.filter((x) => x.kind === 'etco2-low'))
-    doc.rect(X(f.startSec), top, Math.max(1, X(f.endSec) - X(f.startSec)), plotH).fill(colors.low);
+  const band = (x: { startSec: number; endSec: number }, color: string) =>
+    doc.rect(X(x.startSec), top, Math.max(1, X(x.endSec) - X(x.startSec)), plotH).fill(color);
+  for (const x of tl.shaded) band(x, x.kind === 'compressions' ? colors.band : colors.low);
+  for (const g of tl.gaps) band(g, colors.gap);
 
   doc.lineWidth(0.4).strokeColor(colors.rule);
   for (let v = 0; v <= yMax; v += 10) {
@@ -48,13 +41,12 @@ export function drawTimeline(l: Layout, d: Debrief): void {
       align: 'right',
     });
   }
-  const step = tickStep(duration) * 60;
-  for (let t = 0; t <= duration; t += step) {
+  for (const t of tl.ticks) {
     doc
-      .moveTo(X(t), top + plotH)
-      .lineTo(X(t), top + plotH + 3)
+      .moveTo(X(t.tSec), top + plotH)
+      .lineTo(X(t.tSec), top + plotH + 3)
       .stroke();
-    l.text(`${Math.round(t / 60)}`, X(t) - 10, top + plotH + 5, {
+    l.text(t.label, X(t.tSec) - 10, top + plotH + 5, {
       size: 7,
       color: colors.muted,
       width: 20,
@@ -81,13 +73,13 @@ export function drawTimeline(l: Layout, d: Debrief): void {
   drawRises(l, d, X, top, plotH);
   drawMarkers(
     l,
-    d.events.filter((e) => !e.supersededBy && code(e)),
+    tl.markers.filter((m) => m.code),
     X,
     top - lane + 4,
   );
   doc.y = top + plotH + 26;
   l.text(
-    `Green: compressions on. Red: EtCO2 below ${low} mmHg (dashed line) for the profile's minimum time. Blue: EtCO2 rise (dashed when a confounder came before it). Dots: entered values; line: per-breath EtCO2; grey: capnogram.`,
+    `Green: compressions on. Red: EtCO2 below ${low} mmHg (dashed line) for the profile's minimum time. Blue: EtCO2 rise (dashed when a confounder came before it). Grey: no capnogram stored (a data gap). Dots: entered values; line: per-breath EtCO2; grey: capnogram.`,
     l.left,
     doc.y,
     { size: 7.5, color: colors.muted, width: l.width },
@@ -122,15 +114,15 @@ function drawTrace(
 
 function drawRises(l: Layout, d: Debrief, X: (t: number) => number, top: number, h: number): void {
   const doc = l.doc;
-  for (const f of d.findings.filter((x) => x.kind === 'etco2-rise')) {
+  for (const f of d.timeline.rises) {
     doc.lineWidth(1.2).strokeColor(colors.rise);
     if (f.confounder) doc.dash(3, { space: 2 });
     doc
-      .moveTo(X(f.startSec), top + h)
-      .lineTo(X(f.startSec), top)
+      .moveTo(X(f.tSec), top + h)
+      .lineTo(X(f.tSec), top)
       .stroke()
       .undash();
-    l.text(f.confounder ? 'rise?' : 'rise', X(f.startSec) + 2, top + 2, {
+    l.text(f.confounder ? 'rise?' : 'rise', X(f.tSec) + 2, top + 2, {
       size: 7,
       color: colors.rise,
     });
@@ -140,7 +132,7 @@ function drawRises(l: Layout, d: Debrief, X: (t: number) => number, top: number,
 /** Event codes in up to three rows so that close events do not overprint each other. */
 function drawMarkers(
   l: Layout,
-  events: DebriefEvent[],
+  events: TimelineMarker[],
   X: (t: number) => number,
   laneTop: number,
 ): void {
@@ -148,7 +140,7 @@ function drawMarkers(
   const rowEnds = [-Infinity, -Infinity, -Infinity];
   doc.fontSize(6.5);
   for (const e of events) {
-    const label = code(e);
+    const label = e.code;
     if (e.kind === 'note') {
       // Notes are many and wordy: a tick on the lane; their text is in the event table.
       doc

@@ -16,9 +16,13 @@ export async function getLocalDebrief(id: string): Promise<Debrief | null> {
     [id, ''],
     [id, '\uffff'],
   ] as const;
-  const [events, etco2, answers, meta] = await Promise.all([
+  const [events, etco2, waveformChunks, answers, meta] = await Promise.all([
     offlineDb.events.where('[resuscitationId+at]').between(range[0], range[1]).toArray(),
     offlineDb.etco2.where('[resuscitationId+at]').between(range[0], range[1]).toArray(),
+    offlineDb.waveformChunks
+      .where('[resuscitationId+startAt]')
+      .between(range[0], range[1])
+      .toArray(),
     offlineDb.acks.where('resuscitationId').equals(id).toArray(),
     offlineDb.meta.get('context'),
   ]);
@@ -28,6 +32,7 @@ export async function getLocalDebrief(id: string): Promise<Debrief | null> {
     record,
     events: withAcks(events, acks),
     etco2: withAcks(etco2, acks),
+    waveformChunks: waveformChunks.filter((c) => acks.get(c.id)?.state !== 2),
     context,
   });
 }

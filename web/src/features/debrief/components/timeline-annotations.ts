@@ -28,6 +28,16 @@ export function annotationsOf(
       drawTime: 'beforeDatasetsDraw',
     };
   });
+  m.gaps.forEach((g, i) => {
+    out[`gap${i}`] = {
+      type: 'box',
+      xMin: g.startSec,
+      xMax: g.endSec,
+      backgroundColor: 'rgba(120, 130, 140, 0.18)',
+      borderWidth: 0,
+      drawTime: 'beforeDatasetsDraw',
+    };
+  });
   out.lowLine = {
     type: 'line',
     yMin: m.lowMmHg,

@@ -93,7 +93,10 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
         min: view?.startSec ?? 0,
         max: view?.endSec ?? model.durationSec,
         title: { display: true, text: 'Time from arrest (min:s)' },
-        ticks: { stepSize: niceStep(shownSpan), callback: (v) => clockFromArrest(Number(v)) },
+        ticks: {
+          stepSize: view ? niceStep(shownSpan) : model.tickStepSec,
+          callback: (v) => clockFromArrest(Number(v)),
+        },
       },
       y: { min: 0, max: yMax, title: { display: true, text: 'EtCO2 (mmHg)' } },
     },
@@ -137,9 +140,10 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
       <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 1 }}>
         {model.markers.length} event markers · {model.low.length} low-EtCO2 intervals shaded (below{' '}
         {model.lowMmHg} mmHg) · {model.compressions.length} compression periods (green) ·{' '}
-        {model.rises.length} EtCO2 rises (dashed: after a confounder). Markers: CA arrest, S shock,
-        E epinephrine, D other drug, A airway, V ventilation, R rhythm, P pulse, ROSC, RA re-arrest,
-        IV access, N note, ▶/■ compressions on/off. Drag or pinch to pan and zoom.
+        {model.rises.length} EtCO2 rises (dashed: after a confounder) · grey: no capnogram stored.
+        Markers: CA arrest, S shock, E epinephrine, D other drug, A airway, V ventilation, R rhythm,
+        P pulse, ROSC, RA re-arrest, IV access, N note, ▶/■ compressions on/off. Drag or pinch to
+        pan and zoom.
       </Typography>
     </Box>
   );

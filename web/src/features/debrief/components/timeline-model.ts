@@ -1,24 +1,11 @@
-import { eventsInForce } from '@upstroke/capno';
-import {
-  clockFromArrest,
-  type Debrief,
-  type DebriefEvent,
-  eventLabel,
-  eventMarkerCodes,
-} from '@upstroke/contracts';
+import type { Debrief } from '@upstroke/contracts';
 
-/** Timeline markers: the shared codes plus symbols that only the screen's fonts draw. */
-export const markerCodes: Record<string, string> = {
-  ...eventMarkerCodes,
+/** Symbols for events without a shared code, that only the screen's fonts draw. */
+const screenSymbols: Record<string, string> = {
   'compressions-start': '▶',
   'compressions-stop': '■',
   correction: '✎',
 };
-
-export function markerOf(e: DebriefEvent): string {
-  if (e.kind === 'drug' && e.data.drug === 'epinephrine') return 'E';
-  return markerCodes[e.kind] ?? '•';
-}
 
 export interface Marker {
   id: string;
@@ -41,6 +28,8 @@ export interface Rise {
 
 export interface TimelineModel {
   durationSec: number;
+  /** Tick spacing of the whole-code view (capno's round minutes). */
+  tickStepSec: number;
   lowMmHg: number;
   manual: { x: number; y: number }[];
   imported: { x: number; y: number }[];
@@ -49,28 +38,27 @@ export interface TimelineModel {
   markers: Marker[];
   compressions: Band[];
   low: Band[];
+  gaps: Band[];
   rises: Rise[];
 }
 
-/** Events as finally recorded (capno's correction rule), on the debrief's clock. */
-export function effectiveEvents(d: Pick<Debrief, 'events' | 'record'>): DebriefEvent[] {
-  const t0 = Date.parse(d.record.arrestAt);
-  return eventsInForce(d.events).map((e) => ({ ...e, tSec: (Date.parse(e.at) - t0) / 1000 }));
-}
+const band = ({ startSec, endSec }: Band): Band => ({ startSec, endSec });
 
-/** Everything the timeline draws, from the debrief (pure: tested without a canvas). */
+/**
+ * What the chart draws, from the debrief: the span, ticks, markers, shaded intervals and
+ * gaps come from capno's timeline model (the PDF draws the same one); the screen adds its
+ * series, symbols and labels. Pure: tested without a canvas.
+ */
 export function timelineModel(d: Debrief): TimelineModel {
   const pt = (p: { tSec: number; mmHg: number }) => ({
     x: p.tSec,
     y: Math.round(p.mmHg * 10) / 10,
   });
-  const live = effectiveEvents(d);
-  // With an `end` event the code's length is known; later entries (amendment notes) are
-  // still listed but do not stretch the axis.
-  const ended = d.events.some((e) => e.kind === 'end' && !e.supersededBy);
-  const last = ended ? 0 : Math.max(0, ...d.events.map((e) => e.tSec));
+  const tl = d.timeline;
+  const ticks = tl.ticks;
   return {
-    durationSec: Math.max(60, d.measures.durationSec, last),
+    durationSec: tl.span.endSec,
+    tickStepSec: ticks.length > 1 ? ticks[1].tSec - ticks[0].tSec : 60,
     lowMmHg: d.profile.thresholds.lowEtco2MmHg,
     manual: d.etco2Series.filter((p) => p.source === 'manual').map(pt),
     imported: d.etco2Series.filter((p) => p.source === 'import').map(pt),
@@ -78,24 +66,21 @@ export function timelineModel(d: Debrief): TimelineModel {
     wave: d.waveformTrace
       ? d.waveformTrace.tSec.map((x, i) => ({ x, y: d.waveformTrace?.mmHg[i] ?? 0 }))
       : [],
-    markers: live
-      .filter((e) => e.tSec <= Math.max(60, d.measures.durationSec, last))
-      .map((e) => ({
-        id: e.id,
-        tSec: e.tSec,
-        code: markerOf(e),
-        label: `${clockFromArrest(e.tSec)} ${eventLabel(e.kind, e.data)}`,
-        amendment: e.amendment,
-      })),
-    compressions: d.measures.compressionIntervals ?? [],
-    low: d.findings.filter((f) => f.kind === 'etco2-low'),
-    rises: d.findings
-      .filter((f) => f.kind === 'etco2-rise')
-      .map((f) => ({
-        tSec: f.startSec,
-        confounded: f.confounder !== null,
-        label: f.confounder ? `Rise (after ${f.confounder.replace('-', ' ')})` : 'Rise',
-      })),
+    markers: tl.markers.map((m) => ({
+      id: m.id,
+      tSec: m.tSec,
+      code: m.code || screenSymbols[m.kind] || '•',
+      label: m.label,
+      amendment: m.amendment,
+    })),
+    compressions: tl.shaded.filter((x) => x.kind === 'compressions').map(band),
+    low: tl.shaded.filter((x) => x.kind === 'etco2-low').map(band),
+    gaps: tl.gaps.map(band),
+    rises: tl.rises.map((r) => ({
+      tSec: r.tSec,
+      confounded: r.confounder !== null,
+      label: r.confounder ? `Rise (after ${r.confounder.replace('-', ' ')})` : 'Rise',
+    })),
   };
 }
 

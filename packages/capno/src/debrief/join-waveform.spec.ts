@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { analyze } from './analyze.js';
-import { valuesBesideWaveform } from './etco2/series.js';
-import { joinWaveform, storedRecordInput } from './summary-row.js';
-import { synthCapnogram } from './testing/synth-capnogram.js';
+import { analyze } from '../analyze.js';
+import { valuesBesideWaveform } from '../etco2/series.js';
+import { synthCapnogram } from '../testing/synth-capnogram.js';
+import { analyseStored } from './compose.js';
+import { joinWaveform } from './stored-record.js';
 
 const at = (sec: number) => new Date(Date.parse('2026-03-04T10:00:00Z') + sec * 1000).toISOString();
 
@@ -73,8 +74,8 @@ describe('valuesBesideWaveform (a breath is counted once)', () => {
         },
       ],
     };
-    const alone = storedRecordInput({ ...base, etco2: [] });
-    const both = storedRecordInput({ ...base, etco2: perBreath });
+    const alone = analyseStored({ ...base, etco2: [] }).input;
+    const both = analyseStored({ ...base, etco2: perBreath }).input;
     expect(both.etco2).toEqual([]);
     expect(analyze(both).breaths.length).toBe(analyze(alone).breaths.length);
   });
