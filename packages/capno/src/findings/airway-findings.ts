@@ -1,57 +1,10 @@
-import type { Breath, Finding, Interval } from '@upstroke/contracts';
+import type { Finding, Interval } from '@upstroke/contracts';
 import { intersect } from '../events/intervals.js';
 import { isKind } from '../events/normalize.js';
 import { finding, fmt, type FindingContext } from './context.js';
 
-/** Rolling ventilation rate: breaths in the last 60 s, once they span at least 30 s (common practice). */
-export const RATE_WINDOW_SEC = 60;
-export const RATE_MIN_SPAN_SEC = 30;
 /** Consecutive breaths with a raised inspired baseline before `rebreathing` is reported. */
 export const REBREATHING_MIN_BREATHS = 3;
-
-/**
- * Rolling rate (breaths/min) at each breath: (n − 1) × 60 / span of the n breaths in the
- * preceding 60 s; null while they span < 30 s. Two pointers: one pass.
- */
-export function rollingRates(breaths: readonly Breath[]): (number | null)[] {
-  const out: (number | null)[] = [];
-  let lo = 0;
-  for (let i = 0; i < breaths.length; i++) {
-    const t = breaths[i].tSec;
-    while (t - breaths[lo].tSec > RATE_WINDOW_SEC) lo++;
-    const span = t - breaths[lo].tSec;
-    out.push(span >= RATE_MIN_SPAN_SEC ? ((i - lo) * 60) / span : null);
-  }
-  return out;
-}
-
-/** `ventilation-fast`: rolling rate, or a recorded ventilation rate, above the profile's rate + tolerance. Warning. */
-export function ventilationFindings(c: FindingContext): Finding[] {
-  const limit = c.t.ventilationMaxPerMin + c.t.ventilationTolerancePerMin;
-  const out: Finding[] = [];
-  const rates = rollingRates(c.breaths);
-  const msg = (r: number) =>
-    `Ventilation rate about ${fmt(r)}/min, above the ${fmt(c.t.ventilationMaxPerMin)}/min of the protocol. Fast ventilation suggests hyperventilation, which lowers EtCO2 and can impede venous return; consider slowing ventilation.`;
-  for (let i = 0; i < rates.length; i++) {
-    const r = rates[i];
-    if (r === null || r <= limit) continue;
-    let j = i;
-    let peak = r;
-    while (j + 1 < rates.length && (rates[j + 1] ?? 0) > limit)
-      peak = Math.max(peak, rates[++j] ?? 0);
-    const start = Math.max(0, c.breaths[i].tSec - RATE_WINDOW_SEC, c.breaths[0].tSec);
-    out.push(finding('ventilation-fast', start, c.breaths[j].tSec, 'warning', msg(peak)));
-    i = j;
-  }
-  const vents = c.events.filter((e) => isKind(e, 'ventilation'));
-  vents.forEach((e, k) => {
-    const r = isKind(e, 'ventilation') ? e.data.ratePerMin : undefined;
-    if (r === undefined || r <= limit) return;
-    const end = k + 1 < vents.length ? vents[k + 1].tSec : c.tl.endSec;
-    out.push(finding('ventilation-fast', e.tSec, Math.max(e.tSec, end), 'warning', msg(r)));
-  });
-  return out;
-}
 
 /**
  * `waveform-absent`: with a tracheal tube in place and a waveform being recorded, no breath

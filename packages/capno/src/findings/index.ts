@@ -2,16 +2,17 @@ import type { Finding } from '@upstroke/contracts';
 import {
   airwayUnconfirmedFindings,
   rebreathingFindings,
-  ventilationFindings,
   waveformAbsentFindings,
 } from './airway-findings.js';
 import type { FindingContext } from './context.js';
+import { oneFindingPerEpisode } from './episodes.js';
 import { lowFindings, prognosisFindings, riseFindings } from './etco2-findings.js';
+import { ventilationFindings } from './ventilation-findings.js';
 import { epinephrineFindings, pauseFindings, rhythmCheckFindings } from './process-findings.js';
 
 export { CAUTION, type FindingContext } from './context.js';
 
-/** Every finding rule, in a stable order: by start time, then kind. */
+/** Every finding rule, one finding per episode, in a stable order: by start time, then kind. */
 export function allFindings(c: FindingContext): Finding[] {
   const out = [
     ...lowFindings(c),
@@ -25,5 +26,5 @@ export function allFindings(c: FindingContext): Finding[] {
     ...airwayUnconfirmedFindings(c),
     ...rebreathingFindings(c),
   ];
-  return out.sort((a, b) => a.startSec - b.startSec || a.kind.localeCompare(b.kind));
+  return oneFindingPerEpisode(out);
 }
