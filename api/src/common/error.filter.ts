@@ -51,6 +51,15 @@ export class ErrorFilter implements ExceptionFilter {
       const message = Array.isArray(raw) ? raw.join('; ') : String(raw ?? exception.message);
       return { statusCode: status, error: reasons[status] ?? 'Error', message };
     }
+    // An entry that reached the lock trigger while the record was being signed.
+    const pg = exception as { code?: unknown; message?: unknown };
+    if (pg?.code === '23514' && String(pg.message).includes('signed and locked')) {
+      return {
+        statusCode: 409,
+        error: 'Conflict',
+        message: 'This record is signed and locked; add an amendment instead',
+      };
+    }
     // Body-parser errors (malformed JSON, too large) carry their own status.
     const status = (exception as { status?: unknown })?.status;
     if (typeof status === 'number' && status >= 400 && status < 500) {

@@ -99,14 +99,21 @@ export class DebriefRepository {
     await trx('amendments').insert({ ...row, fields: JSON.stringify(row.fields) });
   }
 
-  /** Marks the record signed unless it already is; returns false when it was. */
+  /**
+   * Marks the record signed unless it already is; returns false when it was. The time is
+   * read now (not at transaction start) so it follows every entry committed before the
+   * record's row lock was granted.
+   */
   async markSigned(id: string, userId: string, trx: Db): Promise<boolean> {
-    const n = await trx('resuscitations').where({ id }).whereNot({ status: 'signed' }).update({
-      status: 'signed',
-      signedAt: trx.fn.now(),
-      signedBy: userId,
-      updatedAt: trx.fn.now(),
-    });
+    const n = await trx('resuscitations')
+      .where({ id })
+      .whereNot({ status: 'signed' })
+      .update({
+        status: 'signed',
+        signedAt: trx.raw('clock_timestamp()'),
+        signedBy: userId,
+        updatedAt: trx.fn.now(),
+      });
     return n > 0;
   }
 }

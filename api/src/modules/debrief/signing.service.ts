@@ -23,6 +23,16 @@ import { DebriefRepository } from './debrief.repository';
 /** Utstein core closing details the lead must fill in before signing (Nolan 2019). */
 const requiredToSign = ['outcome', 'firstRhythm', 'witnessed', 'monitored'] as const;
 
+function assertClosingDetails(record: ResuscitationRow): void {
+  const missing = requiredToSign.filter((f) => record[f] === null || record[f] === undefined);
+  if (missing.length > 0) {
+    throw badRequest(
+      `${missing.join(', ')}: complete the closing details before signing`,
+      missing.map((path) => ({ path, message: 'Required before signing' })),
+    );
+  }
+}
+
 /**
  * Signing locks a record; afterwards it changes only through amendments with a reason.
  * The database enforces the lock too (migration 20261202003001); these rules give the
@@ -45,17 +55,16 @@ export class SigningService {
     return record;
   }
 
+  /**
+   * Signs under the record's row lock: entries still being written finish first, later
+   * ones are refused by the lock triggers, and the summary row sees exactly what was signed.
+   */
   async sign(user: AuthUser, id: string, deviceId?: string): Promise<Resuscitation> {
-    const record = await this.leadRecord(user, id);
-    if (record.status === 'signed') throw conflict('This record is already signed');
-    const missing = requiredToSign.filter((f) => record[f] === null || record[f] === undefined);
-    if (missing.length > 0) {
-      throw badRequest(
-        `${missing.join(', ')}: complete the closing details before signing`,
-        missing.map((path) => ({ path, message: 'Required before signing' })),
-      );
-    }
+    await this.leadRecord(user, id);
     await this.repo.transaction(async (trx) => {
+      const record = (await this.records.lockById(id, trx)) as ResuscitationRow;
+      if (record.status === 'signed') throw conflict('This record is already signed');
+      assertClosingDetails(record);
       if (!(await this.repo.markSigned(id, user.id, trx)))
         throw conflict('This record is already signed');
       await this.audit.insert(
@@ -91,6 +100,9 @@ export class SigningService {
       ]);
     const amendmentId = randomUUID();
     await this.repo.transaction(async (trx) => {
+      // One amendment at a time per record: both would otherwise hold the row in share mode
+      // (lock triggers) and deadlock when they update it.
+      await this.records.lockById(id, trx);
       // The amendment row comes first: the lock triggers let through only changes made in
       // the same transaction as an amendment of this record.
       await this.repo.insertAmendment(

@@ -59,6 +59,14 @@ export class ResuscitationsRepository {
     return (trx ?? this.db)<ResuscitationRow>('resuscitations').where({ id }).first(columns);
   }
 
+  /**
+   * The record with its row locked until the transaction ends. Entry inserts take the same
+   * row in share mode (lock triggers), so while this is held no entry can commit.
+   */
+  async lockById(id: string, trx: Db): Promise<ResuscitationRow | undefined> {
+    return trx<ResuscitationRow>('resuscitations').where({ id }).forUpdate().first(columns);
+  }
+
   /** Inserts unless the id exists; returns true when a row was added. */
   async insertIfAbsent(row: Record<string, unknown>, trx?: Db): Promise<boolean> {
     const added = await (trx ?? this.db)('resuscitations')

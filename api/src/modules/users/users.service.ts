@@ -42,10 +42,8 @@ export class UsersService {
 
   /** The user, locked for this transaction, if this admin manages them (else not found). */
   private async managedUser(admin: AuthUser, id: string, trx: Db): Promise<UserWithSites> {
-    const [user, scope] = await Promise.all([
-      this.users.findWithSites(id, trx, true),
-      this.scope.scopeOf(admin, trx),
-    ]);
+    const user = await this.users.findWithSites(id, trx, true);
+    const scope = await this.scope.scopeOf(admin, trx);
     // Someone else's user is as invisible here as in the list.
     if (!user || !managesUser(scope, user.siteIds)) throw notFound('User');
     return user;
