@@ -54,6 +54,18 @@ const cases: [string, string | Buffer, number, RegExp][] = [
   ],
   ['wrong encoding (UTF-16)', Buffer.from('\ufefftime,co2\n', 'utf16le'), 400, /encoding/],
   [
+    'starting in year 0000',
+    ['# unit=mmHg', 'time,co2', '0000-01-01T00:00:00Z,4', '0000-01-01T00:00:01Z,5'].join('\n'),
+    400,
+    /line 3: time: "0000-01-01T00:00:00Z" is outside the years 1900 to 2199/,
+  ],
+  [
+    'seconds from a start in year 9999',
+    ['# unit=mmHg', '# start=9999-01-01T00:00:00Z', 'time,co2', '0,4'].join('\n'),
+    400,
+    /line 2: start: time: .* outside the years/,
+  ],
+  [
     'time without offset',
     ['# unit=mmHg', 'time,co2', '2026-03-04 10:00:00,4'].join('\n'),
     400,

@@ -1,4 +1,5 @@
 import { type PipeTransform } from '@nestjs/common';
+import { jsonProblem } from '@upstroke/contracts';
 import type { z } from 'zod';
 import { badRequest } from './errors';
 
@@ -9,11 +10,20 @@ export function issuesToDetails(error: z.ZodError): { path: string; message: str
   }));
 }
 
-/** Validates a body or query with a shared schema from @upstroke/contracts. */
+/**
+ * Validates a body or query with a shared schema from @upstroke/contracts. Anything the
+ * database cannot store (NUL, lone surrogates, nesting deeper than 20) is refused first,
+ * except in batches (`perItem`), whose items are checked and refused one by one.
+ */
 export class ZodPipe<S extends z.ZodType> implements PipeTransform<unknown, z.infer<S>> {
-  constructor(private readonly schema: S) {}
+  constructor(
+    private readonly schema: S,
+    private readonly options: { perItem?: boolean } = {},
+  ) {}
 
   transform(value: unknown): z.infer<S> {
+    const unsafe = this.options.perItem ? null : jsonProblem(value);
+    if (unsafe) throw badRequest(unsafe, [{ path: unsafe.split(':')[0], message: unsafe }]);
     const result = this.schema.safeParse(value);
     if (result.success) return result.data;
     const details = issuesToDetails(result.error);

@@ -1,10 +1,21 @@
 import { z } from 'zod';
+import { yearProblem } from './plausibility.js';
 
 /** Client-generated identifiers for clinical rows (resuscitations, events, samples). */
 export const uuidSchema = z.uuid();
 
-/** ISO-8601 date-time with an offset (`Z` or `+hh:mm`), as every clinical time is stored. */
-export const isoDateTimeSchema = z.iso.datetime({ offset: true });
+/**
+ * ISO-8601 date-time with an offset (`Z` or `+hh:mm`), as every clinical time is stored, in
+ * the years a record can carry (PLAUSIBLE.years).
+ */
+export const isoDateTimeSchema = z.iso
+  .datetime({ offset: true })
+  .refine((s) => yearProblem(s) === null, { error: (i) => yearProblem(String(i.input)) });
+
+/** A calendar date (`2026-03-04`) in the same years. */
+export const isoDateSchema = z.iso
+  .date()
+  .refine((s) => yearProblem(s) === null, { error: (i) => yearProblem(String(i.input)) });
 
 export const roleSchema = z.enum(['recorder', 'lead', 'quality', 'admin']);
 export type Role = z.infer<typeof roleSchema>;

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isoDateTimeSchema, uuidSchema } from './common.js';
+import { doseProblem } from './plausibility.js';
 
 export const drugNameSchema = z.enum([
   'epinephrine',
@@ -41,7 +42,11 @@ export const eventDataSchemas = {
       route: accessRouteSchema.optional(),
       name: z.string().max(200).optional(),
     })
-    .strict(),
+    .strict()
+    .superRefine((d, ctx) => {
+      const problem = d.dose === undefined ? null : doseProblem(d.drug, d.dose, d.unit);
+      if (problem) ctx.addIssue({ code: 'custom', path: ['dose'], message: problem });
+    }),
   airway: z
     .object({ device: airwayDeviceSchema, confirmation: airwayConfirmationSchema.optional() })
     .strict(),

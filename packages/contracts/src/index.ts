@@ -10,3 +10,4 @@ export * from './timeline.js';
 export * from './debrief.js';
 export * from './admin.js';
 export * from './monitor.js';
+export * from './plausibility.js';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { co2UnitSchema, isoDateTimeSchema, listSchema, uuidSchema } from './common.js';
+import { PLAUSIBLE } from './plausibility.js';
 
 /** Monitor link (CONTRACT.md "Monitor link"): the first frame from the server. */
 export const linkHelloSchema = z.object({
@@ -15,7 +16,7 @@ export type LinkHello = z.infer<typeof linkHelloSchema>;
 /** A batch of consecutive samples; `seq` increases by one per batch, so gaps show. */
 export const linkSamplesSchema = z.object({
   type: z.literal('samples'),
-  seq: z.number().int().nonnegative(),
+  seq: z.number().int().nonnegative().max(PLAUSIBLE.int32Max),
   t0: isoDateTimeSchema,
   values: z.array(z.number()),
 });

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { findingKindSchema } from './analysis.js';
-import { isoDateTimeSchema, uuidSchema } from './common.js';
+import { isoDateSchema, isoDateTimeSchema, uuidSchema } from './common.js';
 import { ageGroupSchema, outcomeSchema } from './resuscitations.js';
 import { endReasonSchema, rhythmSchema } from './events.js';
 
@@ -41,7 +41,7 @@ export type RecordSummaryRow = z.infer<typeof recordSummaryRowSchema>;
 export const reviewStatusSchema = z.enum(['pending', 'reviewed', 'needs-follow-up']);
 export type ReviewStatus = z.infer<typeof reviewStatusSchema>;
 
-const dateOrDateTime = z.union([z.iso.date(), isoDateTimeSchema]);
+const dateOrDateTime = z.union([isoDateSchema, isoDateTimeSchema]);
 
 /** Filters shared by the trends series, the records table, the Utstein summary and exports. */
 export const trendsFilterSchema = z

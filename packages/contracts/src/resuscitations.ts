@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { co2UnitSchema, isoDateTimeSchema, uuidSchema } from './common.js';
+import { arrestTimeProblem, PLAUSIBLE } from './plausibility.js';
 import { etco2SourceSchema } from './analysis.js';
 import { endReasonSchema, eventKindSchema, rhythmSchema } from './events.js';
 import { rosterSchema } from './site-context.js';
@@ -9,16 +10,27 @@ export type AgeGroup = z.infer<typeof ageGroupSchema>;
 export const resuscitationStatusSchema = z.enum(['open', 'closed', 'signed']);
 export type ResuscitationStatus = z.infer<typeof resuscitationStatusSchema>;
 
+/** Weight in kg within PLAUSIBLE.weightKg (the forms and the API share it). */
+export const weightKgSchema = z
+  .number()
+  .min(PLAUSIBLE.weightKg.min, `at least ${PLAUSIBLE.weightKg.min} kg`)
+  .max(PLAUSIBLE.weightKg.max, `at most ${PLAUSIBLE.weightKg.max} kg`);
+
+/** An arrest time within the last 10 years and not more than 1 h ahead (checked when parsed). */
+export const arrestAtSchema = isoDateTimeSchema.refine((s) => arrestTimeProblem(s) === null, {
+  error: (i) => arrestTimeProblem(String(i.input)),
+});
+
 export const createResuscitationSchema = z
   .object({
     id: uuidSchema,
     siteId: uuidSchema,
     unitId: uuidSchema.optional(),
-    arrestAt: isoDateTimeSchema,
+    arrestAt: arrestAtSchema,
     location: z.string().max(200).optional(),
     patientRef: z.string().max(100).optional(),
     ageGroup: ageGroupSchema.optional(),
-    weightKg: z.number().positive().max(400).optional(),
+    weightKg: weightKgSchema.optional(),
   })
   .strict();
 export type CreateResuscitation = z.infer<typeof createResuscitationSchema>;
@@ -34,11 +46,11 @@ export const outcomeSchema = z.enum([
 export const patchResuscitationSchema = z
   .object({
     unitId: uuidSchema.nullable(),
-    arrestAt: isoDateTimeSchema,
+    arrestAt: arrestAtSchema,
     location: z.string().max(200).nullable(),
     patientRef: z.string().max(100).nullable(),
     ageGroup: ageGroupSchema.nullable(),
-    weightKg: z.number().positive().max(400).nullable(),
+    weightKg: weightKgSchema.nullable(),
     status: z.enum(['open', 'closed']),
     witnessed: z.boolean().nullable(),
     monitored: z.boolean().nullable(),
@@ -107,7 +119,7 @@ export const waveformChunkSchema = z
     startAt: isoDateTimeSchema,
     sampleRateHz: z.number().min(10).max(200),
     unit: co2UnitSchema,
-    seq: z.number().int().nonnegative().optional(),
+    seq: z.number().int().nonnegative().max(PLAUSIBLE.int32Max).optional(),
     values: z.array(z.number().finite()).min(1).max(60000),
   })
   .strict();

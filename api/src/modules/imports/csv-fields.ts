@@ -1,4 +1,4 @@
-import { type Co2Unit, co2UnitSchema } from '@upstroke/contracts';
+import { type Co2Unit, co2UnitSchema, PLAUSIBLE } from '@upstroke/contracts';
 import { mmHgFactor } from '@upstroke/capno';
 
 /** Column positions found in the header row (CONTRACT.md "Monitor file import"). */
@@ -39,16 +39,24 @@ export function readUnit(text: string): Co2Unit | string {
     : `unit: unknown unit "${text.trim().slice(0, 20)}" (use mmHg, kPa or %)`;
 }
 
+/** A time a record can carry (PLAUSIBLE.years), or the problem. */
+function plausible(ms: number, s: string): number | string {
+  const year = new Date(ms).getUTCFullYear();
+  const { min, max } = PLAUSIBLE.years;
+  if (Number.isFinite(ms) && year >= min && year <= max) return ms;
+  return `time: "${s.slice(0, 40)}" is outside the years ${min} to ${max}`;
+}
+
 /** Epoch milliseconds of a `time` field; a string is the problem. */
 export function readTime(text: string, startMs: number | null): number | string {
   const s = text.trim();
   if (ISO_WITH_OFFSET.test(s)) {
     const ms = Date.parse(s);
-    if (Number.isFinite(ms)) return ms;
+    if (Number.isFinite(ms)) return plausible(ms, s);
   }
   if (DECIMAL.test(s)) {
     if (startMs === null) return 'time: seconds need a "# start=<ISO time>" line before the header';
-    return startMs + Number(s) * 1000;
+    return plausible(startMs + Number(s) * 1000, s);
   }
   return `time: "${s.slice(0, 40)}" is not an ISO-8601 time with offset nor seconds`;
 }

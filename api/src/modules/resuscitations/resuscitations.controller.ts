@@ -19,23 +19,26 @@ import {
   listResuscitationsQuerySchema,
   type PatchResuscitation,
   patchResuscitationSchema,
+  textProblem,
 } from '@upstroke/contracts';
 import type { Response } from 'express';
 import { z } from 'zod';
 import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
+import { badRequest } from '../../common/errors';
 import { ZodPipe } from '../../common/zod.pipe';
+import { clockOffsetOf } from './clock-offset';
 import { ResuscitationsService } from './resuscitations.service';
 import { type SyncContext, SyncService } from './sync.service';
 
-const batchOf = (key: string) => z.object({ [key]: z.array(z.unknown()).max(5000) }).strict();
+const batchOf = (key: string) =>
+  new ZodPipe(z.object({ [key]: z.array(z.unknown()).max(5000) }).strict(), { perItem: true });
 const uuid = new ParseUUIDPipe({ version: undefined });
 
 function syncContext(deviceId?: string, offset?: string): SyncContext {
-  const clockOffsetMs =
-    offset !== undefined && Number.isFinite(Number(offset))
-      ? Math.round(Number(offset))
-      : undefined;
-  return { deviceId: deviceId?.slice(0, 200), clockOffsetMs };
+  const device = deviceId?.slice(0, 200);
+  if (device !== undefined && textProblem(device))
+    throw badRequest(`X-Device-Id: ${textProblem(device)}`);
+  return { deviceId: device, clockOffsetMs: clockOffsetOf(offset) };
 }
 
 @ApiTags('resuscitations')
@@ -102,7 +105,7 @@ export class ResuscitationsController {
   events(
     @CurrentUser() user: AuthUser,
     @Param('id', uuid) id: string,
-    @Body(new ZodPipe(batchOf('events'))) body: { events: unknown[] },
+    @Body(batchOf('events')) body: { events: unknown[] },
     @Headers('x-device-id') deviceId?: string,
     @Headers('x-clock-offset-ms') offset?: string,
   ): Promise<BatchResult> {
@@ -114,7 +117,7 @@ export class ResuscitationsController {
   etco2(
     @CurrentUser() user: AuthUser,
     @Param('id', uuid) id: string,
-    @Body(new ZodPipe(batchOf('samples'))) body: { samples: unknown[] },
+    @Body(batchOf('samples')) body: { samples: unknown[] },
     @Headers('x-device-id') deviceId?: string,
     @Headers('x-clock-offset-ms') offset?: string,
   ): Promise<BatchResult> {
@@ -126,7 +129,7 @@ export class ResuscitationsController {
   waveform(
     @CurrentUser() user: AuthUser,
     @Param('id', uuid) id: string,
-    @Body(new ZodPipe(batchOf('chunks'))) body: { chunks: unknown[] },
+    @Body(batchOf('chunks')) body: { chunks: unknown[] },
     @Headers('x-device-id') deviceId?: string,
     @Headers('x-clock-offset-ms') offset?: string,
   ): Promise<BatchResult> {

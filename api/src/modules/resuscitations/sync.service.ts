@@ -1,16 +1,10 @@
 import { Injectable } from '@nestjs/common';
-import { toMmHg } from '@upstroke/capno';
-import {
-  type BatchResult,
-  etco2SampleSchema,
-  eventSchema,
-  waveformChunkSchema,
-} from '@upstroke/contracts';
-import type { z } from 'zod';
+import type { BatchResult } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { AuditRepository } from '../audit/audit.repository';
 import { ClinicalDataRepository } from './clinical-data.repository';
 import { ResuscitationAccess } from './resuscitation-access';
+import { etco2Row, eventRow, type RowContext, type RowResult, waveformRow } from './sync-rows';
 
 type Table = 'resuscitationEvents' | 'etco2Samples' | 'waveformChunks';
 
@@ -22,11 +16,6 @@ export interface SyncContext {
 function idOf(item: unknown, index: number): string {
   const id = (item as { id?: unknown } | null)?.id;
   return typeof id === 'string' ? id : `#${index}`;
-}
-
-function reasonOf(error: z.ZodError): string {
-  const issue = error.issues[0];
-  return issue ? `${issue.path.map(String).join('.') || 'item'}: ${issue.message}` : 'invalid';
 }
 
 /**
@@ -42,66 +31,15 @@ export class SyncService {
   ) {}
 
   events(user: AuthUser, id: string, items: unknown[], ctx: SyncContext): Promise<BatchResult> {
-    return this.ingest(user, id, items, ctx, 'resuscitationEvents', (raw) => {
-      const parsed = eventSchema.safeParse({ resuscitationId: id, ...(raw as object) });
-      if (!parsed.success) return { error: reasonOf(parsed.error) };
-      const e = parsed.data;
-      if (e.resuscitationId !== id)
-        return { error: 'resuscitationId: does not match the record in the address' };
-      return {
-        row: {
-          id: e.id,
-          resuscitationId: id,
-          at: e.at,
-          kind: e.kind,
-          data: JSON.stringify(e.data),
-          recordedBy: user.id,
-          deviceId: e.deviceId ?? ctx.deviceId ?? null,
-          clockOffsetMs: ctx.clockOffsetMs ?? null,
-        },
-      };
-    });
+    return this.ingest(user, id, items, ctx, 'resuscitationEvents', eventRow);
   }
 
   etco2(user: AuthUser, id: string, items: unknown[], ctx: SyncContext): Promise<BatchResult> {
-    return this.ingest(user, id, items, ctx, 'etco2Samples', (raw) => {
-      const parsed = etco2SampleSchema.safeParse(raw);
-      if (!parsed.success) return { error: reasonOf(parsed.error) };
-      const s = parsed.data;
-      const valueMmhg = toMmHg(s.value, s.unit);
-      if (valueMmhg > 150) return { error: 'value: above 150 mmHg' };
-      return {
-        row: {
-          ...s,
-          resuscitationId: id,
-          valueMmhg,
-          recordedBy: user.id,
-          deviceId: s.deviceId ?? ctx.deviceId ?? null,
-        },
-      };
-    });
+    return this.ingest(user, id, items, ctx, 'etco2Samples', etco2Row);
   }
 
   waveform(user: AuthUser, id: string, items: unknown[], ctx: SyncContext): Promise<BatchResult> {
-    return this.ingest(user, id, items, ctx, 'waveformChunks', (raw) => {
-      const parsed = waveformChunkSchema.safeParse(raw);
-      if (!parsed.success) return { error: reasonOf(parsed.error) };
-      const c = parsed.data;
-      const samples = Buffer.from(new Float32Array(c.values).buffer);
-      return {
-        row: {
-          id: c.id,
-          resuscitationId: id,
-          startAt: c.startAt,
-          sampleRateHz: c.sampleRateHz,
-          unit: c.unit,
-          seq: c.seq ?? null,
-          sampleCount: c.values.length,
-          samples,
-          source: 'stream',
-        },
-      };
-    });
+    return this.ingest(user, id, items, ctx, 'waveformChunks', waveformRow);
   }
 
   private async ingest(
@@ -110,15 +48,17 @@ export class SyncService {
     items: unknown[],
     ctx: SyncContext,
     table: Table,
-    toRow: (raw: unknown) => { row?: Record<string, unknown>; error?: string },
+    toRow: (raw: unknown, c: RowContext) => RowResult,
   ): Promise<BatchResult> {
-    await this.access.writable(user, id);
+    const record = await this.access.writable(user, id);
+    const c: RowContext = { ...ctx, user, recordId: id, arrestAt: record.arrestAt };
     const rejected: BatchResult['rejected'] = [];
     const rows: Record<string, unknown>[] = [];
     const seen = new Set<string>();
     items.forEach((raw, i) => {
-      const { row, error } = toRow(raw);
-      if (!row) return rejected.push({ id: idOf(raw, i), reason: error ?? 'invalid' });
+      const result = toRow(raw, c);
+      if ('error' in result) return rejected.push({ id: idOf(raw, i), reason: result.error });
+      const { row } = result;
       if (seen.has(row.id as string)) return; // repeated inside one batch: a duplicate
       seen.add(row.id as string);
       rows.push(row);
@@ -132,6 +72,13 @@ export class SyncService {
     for (const fid of foreign)
       rejected.push({ id: fid, reason: 'id: already used by another record' });
     const accepted = await this.data.insertNew(table, own);
+    if (accepted < own.length) {
+      // Another record may have taken an id between the look-up and the insert.
+      const late = await this.data.idsOwnedElsewhere(table, [...seen], id);
+      for (const fid of late)
+        if (!foreign.has(fid))
+          rejected.push({ id: fid, reason: 'id: already used by another record' });
+    }
     if (accepted > 0) {
       await this.audit.insert({
         userId: user.id,

@@ -8,7 +8,7 @@ import {
   Stack,
   TextField,
 } from '@mui/material';
-import type { PatchResuscitation } from '@upstroke/contracts';
+import { type PatchResuscitation, PLAUSIBLE, weightKgSchema } from '@upstroke/contracts';
 import { useState } from 'react';
 import { type LocalResuscitation, updateResuscitation } from '../../../lib/offline';
 
@@ -24,7 +24,7 @@ export function DetailsDialog(props: {
   const [ageGroup, setAgeGroup] = useState<string>(r.ageGroup ?? '');
   const [weight, setWeight] = useState(r.weightKg ? String(r.weightKg) : '');
   const weightKg = weight === '' ? null : Number(weight);
-  const weightBad = weightKg !== null && !(weightKg > 0 && weightKg <= 400);
+  const weightBad = weightKg !== null && !weightKgSchema.safeParse(weightKg).success;
   const save = async () => {
     const patch: PatchResuscitation = {
       location: location.trim() || null,
@@ -75,7 +75,7 @@ export function DetailsDialog(props: {
             error={weightBad}
             helperText={
               weightBad
-                ? 'Weight must be between 0 and 400 kg'
+                ? `Weight must be between ${PLAUSIBLE.weightKg.min} and ${PLAUSIBLE.weightKg.max} kg`
                 : 'Children: drug and energy presets use it'
             }
           />
