@@ -18,6 +18,7 @@ export {
   eventsInForce,
   normalizeEvents,
   supersededByMap,
+  supersededIds,
   type TimedEvent,
 } from './events/normalize.js';
 export {

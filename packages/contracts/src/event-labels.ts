@@ -94,7 +94,7 @@ export function eventDetails(kind: string, data: Record<string, unknown>): strin
     case 'note':
       return str(data.text);
     case 'end':
-      return str(data.reason).replace(/-/g, ' ');
+      return endReasonLabels[str(data.reason)] ?? str(data.reason).replace(/-/g, ' ');
     case 'correction':
       return typeof data.reason === 'string' ? data.reason : '';
     default:
@@ -109,6 +109,17 @@ export function eventLabel(kind: string, data: Record<string, unknown>): string 
   const name = eventKindLabels[kind] ?? kind;
   return details && kind !== 'note' ? `${name}: ${details}` : name;
 }
+
+/**
+ * The End choices as the recorder sees them. `rosc-sustained` keeps its contract name but
+ * reads "ROSC at end of record": a tap cannot know that ROSC lasted the 20 min that Utstein
+ * calls sustained (Nolan 2019); the analysis decides that from the times.
+ */
+export const endReasonLabels: Record<string, string> = {
+  'rosc-sustained': 'ROSC at end of record',
+  terminated: 'Terminated',
+  transferred: 'Transferred',
+};
 
 export const outcomeLabels: Record<string, string> = {
   'rosc-sustained': 'ROSC, sustained',

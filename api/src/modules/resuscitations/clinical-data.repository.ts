@@ -154,7 +154,7 @@ export class ClinicalDataRepository {
       q('etco2Samples')
         .where(where)
         .orderBy('at')
-        .select<StoredEtco2Row[]>('at', 'value', 'unit', 'source'),
+        .select<StoredEtco2Row[]>('id', 'at', 'value', 'unit', 'source'),
       q('waveformChunks')
         .where(where)
         .orderBy('startAt')

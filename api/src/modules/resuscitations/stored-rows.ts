@@ -27,6 +27,7 @@ export interface StoredEventRow {
 }
 
 export interface StoredEtco2Row {
+  id: string;
   at: Date;
   value: number;
   unit: Co2Unit;

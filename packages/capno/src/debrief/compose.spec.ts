@@ -187,4 +187,25 @@ describe('timeline model', () => {
     const { debrief } = composeDebrief(s, { record: header, computedBy: 'server' });
     expect(debrief.timeline.gaps).toEqual([{ startSec: 120, endSec: 200 }]);
   });
+
+  it('leaves a typed EtCO2 value taken back by a correction out of the analysis, keeping the correction listed', () => {
+    const base = stored();
+    const wrong = {
+      id: 'v-wrong',
+      at: at(200),
+      value: 80,
+      unit: 'mmHg' as const,
+      source: 'manual',
+    };
+    const undo = ev('u', 205, 'correction', { supersedes: 'v-wrong', reason: 'Undo' });
+    const s = stored({ events: [...base.events, undo], etco2: [...base.etco2, wrong] });
+    const { debrief } = composeDebrief(s, { record: header, computedBy: 'server' });
+    expect(debrief.etco2Series.map((p) => p.mmHg)).toEqual([5, 5, 5, 5, 5]);
+    expect(debrief.events.find((e) => e.id === 'u')?.kind).toBe('correction');
+    const kept = composeDebrief(stored({ etco2: [...base.etco2, wrong] }), {
+      record: header,
+      computedBy: 'server',
+    }).debrief;
+    expect(kept.etco2Series.map((p) => p.mmHg)).toContain(80);
+  });
 });

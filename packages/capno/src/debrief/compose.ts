@@ -13,7 +13,7 @@ import {
 } from '@upstroke/contracts';
 import { analyze } from '../analyze.js';
 import { etco2Series, valuesBesideWaveform } from '../etco2/series.js';
-import { eventsInForce, supersededByMap } from '../events/normalize.js';
+import { eventsInForce, supersededByMap, supersededIds } from '../events/normalize.js';
 import { profileInForce } from './profile-in-force.js';
 import { joinWaveform, type StoredRecord, waveformGaps, waveformSource } from './stored-record.js';
 import { buildTimelineModel } from './timeline-model.js';
@@ -51,7 +51,10 @@ export function analyseStored(stored: StoredRecord): StoredAnalysis {
     if (r.success) events.push(r.data);
   }
   const etco2: NonNullable<AnalysisInput['etco2']> = [];
+  // A value taken back by a correction (Live's Undo) stays stored, and is not analysed.
+  const undone = supersededIds(stored.events);
   for (const v of stored.etco2) {
+    if (v.id !== undefined && undone.has(v.id)) continue;
     const r = analysisEtco2Schema.safeParse(v);
     if (r.success) etco2.push(r.data);
   }

@@ -14,6 +14,8 @@ export interface StoredEvent {
 }
 
 export interface StoredEtco2 {
+  /** Its id, so that a correction can take it back (Live's Undo of a typed value). */
+  id?: string;
   at: string;
   value: number;
   unit: Co2Unit;

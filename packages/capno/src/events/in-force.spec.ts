@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { eventsInForce, supersededByMap } from './normalize.js';
+import { eventsInForce, supersededByMap, supersededIds } from './normalize.js';
 
 const at = (sec: number) => new Date(Date.parse('2026-03-04T10:00:00Z') + sec * 1000).toISOString();
 const ev = (id: string, sec: number, kind: string, data: object = {}) => ({
@@ -43,5 +43,16 @@ describe('eventsInForce (the correction rule for screens and exports)', () => {
     expect(eventsInForce(events).map((e) => e.id)).toEqual(['r']);
     // The same rule for the event list: the undone correction supersedes nothing.
     expect(supersededByMap(events)).toEqual(new Map([['u1', 'u2']]));
+  });
+
+  it('names what the corrections in force took back, typed EtCO2 values included', () => {
+    const events = [
+      ev('r', 90, 'rosc'),
+      ev('u1', 95, 'correction', { supersedes: 'r' }),
+      ev('u2', 97, 'correction', { supersedes: 'u1' }),
+      // 'v' is not an event: a typed EtCO2 value taken back by Undo.
+      ev('u3', 99, 'correction', { supersedes: 'v' }),
+    ];
+    expect([...supersededIds(events)].sort()).toEqual(['u1', 'v']);
   });
 });

@@ -132,3 +132,11 @@ export function epinephrineTimes(events: readonly TimedEvent[]): number[] {
     .filter((e) => isKind(e, 'drug') && e.data.drug === 'epinephrine')
     .map((e) => e.tSec);
 }
+
+/**
+ * Ids removed by the corrections in force (same rule as `eventsInForce`). A correction may
+ * supersede any entry of the record: an event, or a typed EtCO2 value taken back by Undo.
+ */
+export function supersededIds(events: readonly CorrectableEvent[]): Set<string> {
+  return new Set(supersededByMap(events).keys());
+}

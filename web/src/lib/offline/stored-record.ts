@@ -44,6 +44,7 @@ export function storedFromLocal({
       recordedBy: null,
     })),
     etco2: byTime(etco2.filter((v) => !v.rejected)).map((v) => ({
+      id: v.id,
       at: v.at,
       value: v.value,
       unit: v.unit,

@@ -1,5 +1,6 @@
 import { memo } from 'react';
-import { Button, Box } from '@mui/material';
+import { Box, Button, type Theme } from '@mui/material';
+import type { PatientPhase } from '../lib/patient-phase';
 import type { DialogName } from './live-dialogs';
 
 interface Action {
@@ -8,6 +9,8 @@ interface Action {
   onTap?: () => void;
   color?: 'primary' | 'secondary' | 'error' | 'success' | 'warning' | 'inherit';
   disabled?: boolean;
+  /** The obvious next action in this state: drawn with a ring (never moved). */
+  next?: boolean;
 }
 
 const pressable = {
@@ -17,22 +20,33 @@ const pressable = {
   '&.Mui-focusVisible': { outline: '3px solid', outlineColor: 'text.primary', outlineOffset: 2 },
 } as const;
 
-/** The Live buttons: one tap each, or one tap to a quick dialog. Named exactly as the trade says. */
+const ring = {
+  boxShadow: (t: Theme) =>
+    `0 0 0 4px ${t.palette.background.default}, 0 0 0 8px ${t.palette.warning.dark}`,
+} as const;
+
+/**
+ * The Live buttons: one tap each, or one tap to a quick dialog. Named exactly as the trade
+ * says. Every button keeps its place in every state (nothing moves under a finger); ROSC and
+ * Re-arrest are offered only where they mean something, and Re-arrest is ringed during ROSC.
+ */
 export const ActionGrid = memo(function ActionGrid(props: {
+  phase: PatientPhase;
   onOpen: (d: DialogName) => void;
   onRosc: () => void;
   onRearrest: () => void;
   onUndo: () => void;
   canUndo: boolean;
 }) {
+  const rosc = props.phase === 'rosc';
   const actions: Action[] = [
     { name: 'Shock', dialog: 'shock', color: 'error' },
     { name: 'Drug', dialog: 'drug', color: 'secondary' },
     { name: 'Airway', dialog: 'airway' },
     { name: 'Rhythm', dialog: 'rhythm' },
     { name: 'Pulse', dialog: 'pulse' },
-    { name: 'ROSC', onTap: props.onRosc, color: 'success' },
-    { name: 'Re-arrest', onTap: props.onRearrest, color: 'warning' },
+    { name: 'ROSC', onTap: props.onRosc, color: 'success', disabled: rosc },
+    { name: 'Re-arrest', onTap: props.onRearrest, color: 'warning', disabled: !rosc, next: rosc },
     { name: 'Access', dialog: 'access' },
     { name: 'Note', dialog: 'note' },
     { name: 'EtCO2', dialog: 'etco2', color: 'secondary' },
@@ -57,7 +71,7 @@ export const ActionGrid = memo(function ActionGrid(props: {
           // An instant pressed look instead of the ripple: visible at once through gloves,
           // and no element added and animated on every tap during a code.
           disableRipple
-          sx={pressable}
+          sx={a.next ? { ...pressable, ...ring } : pressable}
         >
           {a.name}
         </Button>

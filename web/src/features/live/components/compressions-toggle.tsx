@@ -2,18 +2,25 @@ import { Button, Typography } from '@mui/material';
 import { memo } from 'react';
 import { useNow } from '../hooks/use-now';
 
-/** Compressions on/off; while off it shows the hands-off seconds counting up. */
+/**
+ * Compressions on/off. While off and pulseless it shows the hands-off seconds counting up,
+ * from the stop or from a re-arrest, whichever is later; during ROSC nothing counts.
+ */
 export const CompressionsToggle = memo(function CompressionsToggle(props: {
   compressing: boolean;
   changedAt: number | null;
+  /** When the current pulseless period began (ms), or null when it began at the arrest. */
+  pulselessSince: number | null;
+  /** False during ROSC: there is no hands-off time for a patient with a pulse. */
+  counting: boolean;
   pauseMaxSec: number;
   onToggle: () => void;
 }) {
   const now = useNow();
+  const from =
+    props.changedAt === null ? null : Math.max(props.changedAt, props.pulselessSince ?? 0);
   const handsOff =
-    !props.compressing && props.changedAt !== null
-      ? Math.max(0, (now - props.changedAt) / 1000)
-      : null;
+    props.counting && !props.compressing && from !== null ? Math.max(0, (now - from) / 1000) : null;
   const long = handsOff !== null && handsOff > props.pauseMaxSec;
   return (
     <Button

@@ -3,24 +3,49 @@ import { List, ListItem, ListItemText, Paper, Typography } from '@mui/material';
 import { eventLabel } from '@upstroke/contracts';
 import type { LocalEtco2, LocalEvent, SyncAck } from '../../../lib/offline';
 import { formatDuration } from '../../../lib/format';
+import { etco2Label, undoneIds } from '../lib/undo-target';
 
-function describe(e: LocalEvent): string {
-  return e.kind === 'correction' ? 'Undo (correction)' : eventLabel(e.kind, e.data);
-}
-
-/** What this tablet has recorded, newest first, with a mark for values not yet on the server. */
 /** Rows drawn at once: enough to check the latest taps, cheap to redraw during a long code. */
 const SHOWN = 40;
 
+interface Row {
+  id: string;
+  at: string;
+  text: string;
+}
+
+/** Every entry with its words; a correction names the entry it took back. */
+function logRows(events: LocalEvent[], etco2: LocalEtco2[]): Row[] {
+  const labels = new Map<string, string>();
+  for (const e of events) labels.set(e.id, eventLabel(e.kind, e.data));
+  for (const v of etco2) labels.set(v.id, etco2Label(v));
+  const text = (e: LocalEvent) => {
+    if (e.kind !== 'correction') return labels.get(e.id) ?? e.kind;
+    const undid = labels.get(String((e.data as { supersedes?: string }).supersedes));
+    return undid ? `Undid: ${undid}` : 'Correction';
+  };
+  return [
+    ...events.map((e) => ({ id: e.id, at: e.at, text: text(e) })),
+    ...etco2.map((v) => ({ id: v.id, at: v.at, text: labels.get(v.id) ?? '' })),
+  ];
+}
+
 /** One line; redrawn only when its text or mark changes (a tap adds one line, not forty). */
-const LogRow = memo(function LogRow(props: { line: string; mark: string | null }) {
+const LogRow = memo(function LogRow(props: { line: string; mark: string | null; undone: boolean }) {
   return (
     <ListItem disableGutters>
-      <ListItemText primary={props.line} secondary={props.mark} />
+      <ListItemText
+        primary={props.undone ? <del>{props.line}</del> : props.line}
+        secondary={[props.undone ? 'undone' : null, props.mark].filter(Boolean).join(' · ') || null}
+      />
     </ListItem>
   );
 });
 
+/**
+ * What this tablet holds for the code, newest first: an entry taken back by Undo stays in the
+ * list struck through (never silently absent), with a mark for what is not yet on the server.
+ */
 export const EventLog = memo(function EventLog(props: {
   arrestAt: string;
   events: LocalEvent[];
@@ -28,10 +53,8 @@ export const EventLog = memo(function EventLog(props: {
   acks: ReadonlyMap<string, SyncAck>;
 }) {
   const t0 = Date.parse(props.arrestAt);
-  const rows = [
-    ...props.events.map((e) => ({ id: e.id, at: e.at, text: describe(e) })),
-    ...props.etco2.map((v) => ({ id: v.id, at: v.at, text: `EtCO2 ${v.value} ${v.unit}` })),
-  ]
+  const undone = undoneIds(props.events);
+  const rows = logRows(props.events, props.etco2)
     .sort((a, b) => b.at.localeCompare(a.at))
     .slice(0, SHOWN);
   return (
@@ -46,6 +69,7 @@ export const EventLog = memo(function EventLog(props: {
             <LogRow
               key={r.id}
               line={`${formatDuration((Date.parse(r.at) - t0) / 1000)}  ${r.text}`}
+              undone={undone.has(r.id)}
               mark={state === 0 ? 'waiting' : state === 2 ? 'refused by server (kept here)' : null}
             />
           );

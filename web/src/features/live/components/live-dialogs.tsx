@@ -1,5 +1,10 @@
 import { memo } from 'react';
-import type { EventData, EventKind, Thresholds } from '@upstroke/contracts';
+import {
+  endReasonLabels,
+  type EventData,
+  type EventKind,
+  type Thresholds,
+} from '@upstroke/contracts';
 import { AirwayDialog } from './airway-dialog';
 import { ChoiceDialog } from './choice-dialog';
 import { DrugDialog } from './drug-dialog';
@@ -19,11 +24,12 @@ const rhythms = [
   { label: 'Asystole', value: 'asystole' },
   { label: 'Organised', value: 'organised' },
 ] as const;
-const endReasons = [
-  { label: 'Sustained ROSC', value: 'rosc-sustained' },
-  { label: 'Terminated', value: 'terminated' },
-  { label: 'Transferred', value: 'transferred' },
-] as const;
+type EndReason = 'rosc-sustained' | 'terminated' | 'transferred';
+// The contract's reasons, labelled as a tap can know them ("ROSC at end of record").
+const endReasons = (['rosc-sustained', 'terminated', 'transferred'] as const).map((value) => ({
+  label: endReasonLabels[value],
+  value,
+}));
 
 /** The quick dialogs behind the Live buttons; each records one event and closes. */
 export const LiveDialogs = memo(function LiveDialogs(props: {
@@ -31,6 +37,7 @@ export const LiveDialogs = memo(function LiveDialogs(props: {
   onClose: () => void;
   record: Record;
   onEtco2: (value: number) => void;
+  onEnd: (reason: EndReason) => void;
   thresholds: Thresholds;
   etco2Unit: 'mmHg' | 'kPa';
   weightKg?: number;
@@ -95,8 +102,11 @@ export const LiveDialogs = memo(function LiveDialogs(props: {
       <ChoiceDialog
         open={open === 'end'}
         title="End the code"
-        choices={[...endReasons]}
-        onPick={(reason) => done('end')({ reason })}
+        choices={endReasons}
+        onPick={(reason) => {
+          props.onEnd(reason);
+          onClose();
+        }}
         onClose={onClose}
       />
       <NoteDialog

@@ -4,19 +4,23 @@ import Stop from '@mui/icons-material/Stop';
 import { memo, useEffect, useState } from 'react';
 import { beep } from '../lib/audio';
 
-/** Compression-rate metronome, 100–120/min (guideline range), default 110; sound follows Mute. */
-export const Metronome = memo(function Metronome() {
+/**
+ * Compression-rate metronome, 100–120/min (guideline range), default 110; sound follows Mute.
+ * `paused` (ROSC, no compressions) silences it; a metronome left on resumes on re-arrest.
+ */
+export const Metronome = memo(function Metronome({ paused = false }: { paused?: boolean }) {
   const [rate, setRate] = useState(110);
   const [on, setOn] = useState(false);
   const [tick, setTick] = useState(false);
+  const running = on && !paused;
   useEffect(() => {
-    if (!on) return;
+    if (!running) return;
     const id = setInterval(() => {
       beep(1200, 30, 0.15);
       setTick((t) => !t);
     }, 60_000 / rate);
     return () => clearInterval(id);
-  }, [on, rate]);
+  }, [running, rate]);
   return (
     <Stack direction="row" spacing={2} sx={{ alignItems: 'center' }}>
       <IconButton
@@ -33,12 +37,13 @@ export const Metronome = memo(function Metronome() {
           width: 20,
           height: 20,
           borderRadius: '50%',
-          bgcolor: on && tick ? 'secondary.main' : 'action.disabled',
+          bgcolor: running && tick ? 'secondary.main' : 'action.disabled',
         }}
       />
       <Typography id="metronome-rate" sx={{ minWidth: 90 }}>
         {rate}/min
       </Typography>
+      {on && paused && <Typography color="text.secondary">Paused during ROSC</Typography>}
       <Slider
         aria-labelledby="metronome-rate"
         aria-label="Metronome rate"

@@ -1,29 +1,51 @@
-import type { EventData, EventKind } from '@upstroke/contracts';
-import { useCallback, useMemo } from 'react';
-import { recordEtco2, recordEvent } from '../../../lib/offline';
+import type { EventData, EventKind, PatchResuscitation } from '@upstroke/contracts';
+import { useCallback, useMemo, useRef } from 'react';
+import { recordEtco2, recordEvent, updateResuscitation } from '../../../lib/offline';
+import { closingCandidate } from '../lib/end-summary';
 import type { LiveState } from '../lib/live-state';
+import type { UndoTarget } from '../lib/undo-target';
+
+type EndReason = NonNullable<PatchResuscitation['endReason']>;
 
 /**
- * Taps → IndexedDB. Undo writes a correction that supersedes the newest event in force.
- * Every handler keeps its identity until what it depends on changes, so the memoised parts
- * of the Live screen do not redraw on each tap.
+ * Taps → IndexedDB. Undo writes a correction that supersedes the newest entry in force
+ * (event or typed EtCO2 value) and says what it took back. Every handler keeps its identity
+ * until what it depends on changes, so the memoised parts of the Live screen do not redraw
+ * on each tap.
  */
-export function useLiveActions(id: string, state: LiveState, etco2Unit: 'mmHg' | 'kPa') {
+export function useLiveActions(
+  id: string,
+  state: LiveState,
+  target: UndoTarget | null,
+  etco2Unit: 'mmHg' | 'kPa',
+) {
   const record = useCallback(
     <K extends EventKind>(kind: K, data: EventData<K>) => void recordEvent(id, kind, data),
     [id],
   );
   const { compressing } = state;
-  const undoable = state.undoable?.id ?? null;
   const toggleCompressions = useCallback(
     () => record(compressing ? 'compressions-stop' : 'compressions-start', {}),
     [record, compressing],
   );
-  const undo = useCallback(() => {
-    if (undoable) record('correction', { supersedes: undoable, reason: 'Undo on the Live screen' });
-  }, [record, undoable]);
+  const undo = useCallback((): string | null => {
+    if (!target) return null;
+    record('correction', { supersedes: target.id, reason: 'Undo on the Live screen' });
+    return target.label;
+  }, [record, target]);
   const rosc = useCallback(() => record('rosc', {}), [record]);
   const rearrest = useCallback(() => record('rearrest', {}), [record]);
+  // Read at the End tap only: the handler need not change with every event.
+  const inForce = useRef(state.inForce);
+  inForce.current = state.inForce;
+  const end = useCallback(
+    (reason: EndReason) => {
+      const at = new Date();
+      void recordEvent(id, 'end', { reason }, { at: at.toISOString() });
+      void updateResuscitation(id, closingCandidate(reason, inForce.current, at.getTime()));
+    },
+    [id],
+  );
   const etco2 = useCallback(
     (value: number) => void recordEtco2(id, value, etco2Unit),
     [id, etco2Unit],
@@ -35,7 +57,7 @@ export function useLiveActions(id: string, state: LiveState, etco2Unit: 'mmHg' |
     [id],
   );
   return useMemo(
-    () => ({ record, toggleCompressions, undo, rosc, rearrest, etco2, etco2At, note }),
-    [record, toggleCompressions, undo, rosc, rearrest, etco2, etco2At, note],
+    () => ({ record, toggleCompressions, undo, rosc, rearrest, end, etco2, etco2At, note }),
+    [record, toggleCompressions, undo, rosc, rearrest, end, etco2, etco2At, note],
   );
 }

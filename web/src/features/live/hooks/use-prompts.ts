@@ -3,20 +3,17 @@ import type { AnalysisEvent, Thresholds } from '@upstroke/contracts';
 import { useMemo } from 'react';
 import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
 import type { LiveState } from '../lib/live-state';
+import { livePrompts, type Prompt } from '../lib/prompts';
 
-export interface Prompt {
-  key: string;
-  text: string;
-  severity: 'info' | 'warning';
-}
+export type { Prompt } from '../lib/prompts';
 
 /** Findings the engine reports while they are still in progress, worded by the engine. */
 const liveKinds = new Set(['etco2-low', 'pause-long', 'preshock-pause-long']);
 
 /**
  * The prompt banner: the analysis engine (`LiveAnalyzer`) for low EtCO2 during compressions
- * and long pauses, and the site's timers for a rhythm check or an epinephrine dose that is due.
- * Recomputed once a second from the recorded data only.
+ * and long pauses, and the site's timers for a rhythm check or an epinephrine dose that is
+ * due, all following the patient's state. Recomputed once a second from the recorded data.
  */
 export function usePrompts(input: {
   arrestAt: string;
@@ -37,36 +34,14 @@ export function usePrompts(input: {
     return a;
   }, [arrestAt, events, etco2, t]);
   return useMemo(() => {
-    if (state.ended) return [];
-    const nowSec = (second * 1000 - Date.parse(arrestAt)) / 1000;
-    const prompts: Prompt[] = analyzer
-      .activeFindings(nowSec)
-      .filter((f) => liveKinds.has(f.kind))
-      .map((f) => ({ key: f.kind, text: f.message, severity: 'warning' }));
-    const handsOff =
-      !state.compressing && state.compressionsChangedAt !== null
-        ? second - state.compressionsChangedAt / 1000
-        : 0;
-    if (handsOff > t.pauseMaxSec && !prompts.some((p) => p.key === 'pause-long'))
-      prompts.push({
-        key: 'hands-off',
-        text: `Hands off for ${Math.round(handsOff)} s`,
-        severity: 'warning',
-      });
-    const cycleFrom = (state.lastRhythmCheckAt ?? Date.parse(arrestAt)) / 1000;
-    if (second - cycleFrom >= t.rhythmCheckIntervalSec)
-      prompts.push({ key: 'rhythm-due', text: 'Rhythm check due', severity: 'info' });
-    if (
-      state.lastEpinephrineAt !== null &&
-      second - state.lastEpinephrineAt / 1000 >= t.epinephrineMinSec
-    )
-      prompts.push({
-        key: 'epinephrine-due',
-        text:
-          'Epinephrine interval reached (site: every ' +
-          `${Math.round(t.epinephrineMinSec / 60)}–${Math.round(t.epinephrineMaxSec / 60)} min)`,
-        severity: 'info',
-      });
-    return prompts;
+    const arrestAtMs = Date.parse(arrestAt);
+    const engine: Prompt[] =
+      state.phase === 'pulseless'
+        ? analyzer
+            .activeFindings((second * 1000 - arrestAtMs) / 1000)
+            .filter((f) => liveKinds.has(f.kind))
+            .map((f) => ({ key: f.kind, text: f.message, severity: 'warning' }))
+        : [];
+    return livePrompts({ state, second, arrestAtMs, thresholds: t, engine });
   }, [analyzer, second, state, t, arrestAt]);
 }

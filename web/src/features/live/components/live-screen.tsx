@@ -1,0 +1,153 @@
+import { Box, Stack } from '@mui/material';
+import type { Thresholds } from '@upstroke/contracts';
+import { memo, useCallback, useDeferredValue, useMemo, useState } from 'react';
+import { ClinicalCaution } from '../../../components/ui/clinical-caution';
+import type { LocalEtco2, LocalEvent, LocalResuscitation } from '../../../lib/offline';
+import { RosterDialog } from '../../board/components/roster-dialog';
+// Monitor link (issue 5): its panel renders here, beside the EtCO2 trend.
+import { MonitorPanel } from '../../monitor/components/monitor-panel';
+import { useLiveActions } from '../hooks/use-live-actions';
+import { type useLiveRecord, useSiteSettings } from '../hooks/use-live-record';
+import { useNow } from '../hooks/use-now';
+import { usePrompts } from '../hooks/use-prompts';
+import type { LiveState } from '../lib/live-state';
+import { undoneIds, undoTarget } from '../lib/undo-target';
+import { ActionGrid } from './action-grid';
+import { CausesChecklist, tickedCauses } from './causes-checklist';
+import { CompressionsToggle } from './compressions-toggle';
+import { DetailsDialog } from './details-dialog';
+import { Etco2Trend } from './etco2-trend';
+import { EventLog } from './event-log';
+import { LiveDialogs, type DialogName } from './live-dialogs';
+import { LiveHeader } from './live-header';
+import { Metronome } from './metronome';
+import { PromptBanner } from './prompt-banner';
+import { TimersBar } from './timers-bar';
+import { UndoNotice } from './undo-notice';
+
+export type LiveData = Pick<ReturnType<typeof useLiveRecord>, 'events' | 'etco2' | 'acks'>;
+
+/** The recording screen while the code runs: everything on it follows the patient's state. */
+export function LiveScreen({
+  record,
+  state,
+  events,
+  etco2,
+  acks,
+}: { record: LocalResuscitation; state: LiveState } & LiveData) {
+  const { thresholds, etco2Unit } = useSiteSettings(record.siteId);
+  // Typed values taken back by Undo stay in the log (struck through) and leave the rest.
+  const kept = useMemo(() => {
+    const undone = undoneIds(events);
+    return undone.size ? etco2.filter((v) => !undone.has(v.id)) : etco2;
+  }, [events, etco2]);
+  const target = useMemo(() => undoTarget(state.inForce, events, etco2), [state, events, etco2]);
+  const actions = useLiveActions(record.id, state, target, etco2Unit);
+  // The log and the analysis redraw at low priority; the clocks tick inside the parts that
+  // show them; everything else is memoised, so a tap redraws only what it changed.
+  const laterEvents = useDeferredValue(events);
+  const laterEtco2 = useDeferredValue(etco2);
+  const laterKept = useDeferredValue(kept);
+  const ticked = useMemo(() => tickedCauses(events), [events]);
+  const [dialog, setDialog] = useState<DialogName | 'details' | 'team' | null>(null);
+  const [undid, setUndid] = useState<string | null>(null);
+  const close = useCallback(() => setDialog(null), []);
+  const openDetails = useCallback(() => setDialog('details'), []);
+  const openTeam = useCallback(() => setDialog('team'), []);
+  const { undo: undoEntry } = actions;
+  const undo = useCallback(() => setUndid(undoEntry()), [undoEntry]);
+  const childWeight = record.ageGroup !== 'adult' ? record.weightKg : undefined;
+  return (
+    <Stack spacing={1.5}>
+      <LiveHeader
+        title="Live"
+        ended={false}
+        recordId={record.id}
+        onDetails={openDetails}
+        onTeam={openTeam}
+      />
+      <ClinicalCaution dense />
+      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', md: '3fr 2fr' }, gap: 2 }}>
+        <Stack spacing={1.5}>
+          <TimersBar arrestAt={record.arrestAt} state={state} thresholds={thresholds} />
+          <CompressionsToggle
+            compressing={state.compressing}
+            changedAt={state.compressionsChangedAt}
+            pulselessSince={state.phaseSince}
+            counting={state.phase === 'pulseless'}
+            pauseMaxSec={thresholds.pauseMaxSec}
+            onToggle={actions.toggleCompressions}
+          />
+          <LivePrompts
+            arrestAt={record.arrestAt}
+            state={state}
+            events={laterEvents}
+            etco2={laterKept}
+            thresholds={thresholds}
+          />
+          <ActionGrid
+            phase={state.phase}
+            onOpen={setDialog}
+            onRosc={actions.rosc}
+            onRearrest={actions.rearrest}
+            onUndo={undo}
+            canUndo={target !== null}
+          />
+          <UndoNotice text={undid} />
+        </Stack>
+        <Stack spacing={1.5}>
+          <Etco2Trend
+            arrestAt={record.arrestAt}
+            values={kept}
+            lowMmHg={thresholds.lowEtco2MmHg}
+            unit={etco2Unit}
+          />
+          <MonitorPanel
+            resuscitationId={record.id}
+            arrestAt={record.arrestAt}
+            onEtco2={actions.etco2At}
+          />
+          <Metronome paused={state.phase !== 'pulseless'} />
+          <EventLog
+            arrestAt={record.arrestAt}
+            events={laterEvents}
+            etco2={laterEtco2}
+            acks={acks}
+          />
+          <CausesChecklist ticked={ticked} onNote={actions.note} />
+        </Stack>
+      </Box>
+      <LiveDialogs
+        open={dialog === 'details' || dialog === 'team' ? null : dialog}
+        onClose={close}
+        record={actions.record}
+        onEtco2={actions.etco2}
+        onEnd={actions.end}
+        thresholds={thresholds}
+        etco2Unit={etco2Unit}
+        weightKg={childWeight}
+        shocksGiven={state.shocks}
+      />
+      {dialog === 'details' && <DetailsDialog open record={record} onClose={close} />}
+      <RosterDialog
+        open={dialog === 'team'}
+        recordId={record.id}
+        roster={record.roster}
+        onClose={close}
+      />
+    </Stack>
+  );
+}
+
+/** The prompt banner, recomputed once a second from the recorded data. */
+const LivePrompts = memo(function LivePrompts(props: {
+  arrestAt: string;
+  state: LiveState;
+  events: LocalEvent[];
+  etco2: LocalEtco2[];
+  thresholds: Thresholds;
+}) {
+  const now = useNow(1000);
+  const prompts = usePrompts({ ...props, now });
+  return <PromptBanner prompts={prompts} />;
+});

@@ -1,0 +1,32 @@
+import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
+
+/** Test entries of one record, `sec` seconds after 2026-03-04T10:00:00Z. */
+export const T0 = Date.UTC(2026, 2, 4, 10, 0, 0);
+export const atSec = (sec: number) => new Date(T0 + sec * 1000).toISOString();
+
+let n = 0;
+export function ev(
+  kind: LocalEvent['kind'],
+  sec: number,
+  data: Record<string, unknown> = {},
+): LocalEvent {
+  n += 1;
+  return { id: `e${n}`, resuscitationId: 'r', at: atSec(sec), kind, data, deviceId: 'd' };
+}
+
+export function typed(
+  value: number,
+  sec: number,
+  source: LocalEtco2['source'] = 'manual',
+): LocalEtco2 {
+  n += 1;
+  return {
+    id: `v${n}`,
+    resuscitationId: 'r',
+    at: atSec(sec),
+    value,
+    unit: 'mmHg',
+    source,
+    deviceId: 'd',
+  };
+}
