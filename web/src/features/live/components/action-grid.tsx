@@ -1,6 +1,6 @@
 import { memo } from 'react';
 import { Box, Button, type Theme } from '@mui/material';
-import type { PatientPhase } from '../lib/patient-phase';
+import type { PatientState } from '@upstroke/capno';
 import type { DialogName } from './live-dialogs';
 
 interface Action {
@@ -31,7 +31,7 @@ const ring = {
  * Re-arrest are offered only where they mean something, and Re-arrest is ringed during ROSC.
  */
 export const ActionGrid = memo(function ActionGrid(props: {
-  phase: PatientPhase;
+  phase: PatientState;
   onOpen: (d: DialogName) => void;
   onRosc: () => void;
   onRearrest: () => void;

@@ -9,16 +9,15 @@ import { useNow } from '../hooks/use-now';
 export const CompressionsToggle = memo(function CompressionsToggle(props: {
   compressing: boolean;
   changedAt: number | null;
-  /** When the current pulseless period began (ms), or null when it began at the arrest. */
-  pulselessSince: number | null;
+  /** When the current pulseless period began (ms): the arrest or the last re-arrest. */
+  pulselessSince: number;
   /** False during ROSC: there is no hands-off time for a patient with a pulse. */
   counting: boolean;
   pauseMaxSec: number;
   onToggle: () => void;
 }) {
   const now = useNow();
-  const from =
-    props.changedAt === null ? null : Math.max(props.changedAt, props.pulselessSince ?? 0);
+  const from = props.changedAt === null ? null : Math.max(props.changedAt, props.pulselessSince);
   const handsOff =
     props.counting && !props.compressing && from !== null ? Math.max(0, (now - from) / 1000) : null;
   const long = handsOff !== null && handsOff > props.pauseMaxSec;

@@ -26,9 +26,9 @@ export function LivePage() {
 /** While the code runs, the Live screen; once it has ended, its read-only summary. */
 function LiveOrSummary(props: { record: LocalResuscitation } & LiveData) {
   const { record, events, etco2, acks } = props;
-  const state = useMemo(() => liveState(events), [events]);
+  const state = useMemo(() => liveState(events, record.arrestAt), [events, record.arrestAt]);
   const summary = useMemo(
-    () => (state.ended ? endSummary(state.inForce, Date.parse(record.arrestAt)) : null),
+    () => (state.ended ? endSummary(state, record.arrestAt) : null),
     [state, record.arrestAt],
   );
   // An End from another tablet closes the record on this one too (the Board lists it as

@@ -42,7 +42,7 @@ export function LiveScreen({
     return undone.size ? etco2.filter((v) => !undone.has(v.id)) : etco2;
   }, [events, etco2]);
   const target = useMemo(() => undoTarget(state.inForce, events, etco2), [state, events, etco2]);
-  const actions = useLiveActions(record.id, state, target, etco2Unit);
+  const actions = useLiveActions(record.id, record.arrestAt, state, target, etco2Unit);
   // The log and the analysis redraw at low priority; the clocks tick inside the parts that
   // show them; everything else is memoised, so a tap redraws only what it changed.
   const laterEvents = useDeferredValue(events);

@@ -54,11 +54,7 @@ export const TimersBar = memo(function TimersBar(props: {
       <Timer label="Since arrest" value={formatDuration(elapsed)} />
       {state.phase === 'rosc' ? (
         <Box sx={{ gridColumn: 'span 2' }}>
-          <Timer
-            label="ROSC for"
-            value={formatDuration((now - (state.phaseSince ?? now)) / 1000)}
-            calm
-          />
+          <Timer label="ROSC for" value={formatDuration((now - state.phaseSince) / 1000)} calm />
         </Box>
       ) : (
         <ArrestTimers {...props} now={now} />

@@ -15,6 +15,7 @@ type EndReason = NonNullable<PatchResuscitation['endReason']>;
  */
 export function useLiveActions(
   id: string,
+  arrestAt: string,
   state: LiveState,
   target: UndoTarget | null,
   etco2Unit: 'mmHg' | 'kPa',
@@ -36,15 +37,15 @@ export function useLiveActions(
   const rosc = useCallback(() => record('rosc', {}), [record]);
   const rearrest = useCallback(() => record('rearrest', {}), [record]);
   // Read at the End tap only: the handler need not change with every event.
-  const inForce = useRef(state.inForce);
-  inForce.current = state.inForce;
+  const now = useRef(state);
+  now.current = state;
   const end = useCallback(
     (reason: EndReason) => {
       const at = new Date();
       void recordEvent(id, 'end', { reason }, { at: at.toISOString() });
-      void updateResuscitation(id, closingCandidate(reason, inForce.current, at.getTime()));
+      void updateResuscitation(id, closingCandidate(reason, now.current, arrestAt, at.getTime()));
     },
-    [id],
+    [id, arrestAt],
   );
   const etco2 = useCallback(
     (value: number) => void recordEtco2(id, value, etco2Unit),

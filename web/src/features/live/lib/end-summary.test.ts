@@ -1,33 +1,33 @@
 import { describe, expect, it } from 'vitest';
 import { closingCandidate, endSummary } from './end-summary';
 import { liveState } from './live-state';
-import { ev, T0 } from './test-events';
+import { ARREST, ev, T0 } from './test-events';
 
-const inForce = (events: Parameters<typeof liveState>[0]) => liveState(events).inForce;
+const state = (events: Parameters<typeof liveState>[0]) => liveState(events, ARREST);
 
 describe('closingCandidate', () => {
-  it('"ROSC at end of record" is not sustained ROSC after 5 min: the outcome is left to the lead', () => {
-    const events = inForce([ev('rosc', 600)]);
-    expect(closingCandidate('rosc-sustained', events, T0 + 900_000)).toEqual({
+  it('"ROSC at end of record" after 5 min of ROSC is not sustained: the outcome is left to the lead', () => {
+    expect(
+      closingCandidate('rosc-sustained', state([ev('rosc', 600)]), ARREST, T0 + 900_000),
+    ).toEqual({
       status: 'closed',
       endReason: 'rosc-sustained',
       outcome: null,
     });
   });
 
-  it('ROSC maintained 20 min at the end is sustained (Utstein in-hospital, Nolan et al. 2019)', () => {
-    const events = inForce([ev('rosc', 600)]);
-    expect(closingCandidate('rosc-sustained', events, T0 + 600_000 + 20 * 60_000).outcome).toBe(
-      'rosc-sustained',
-    );
-    expect(
-      closingCandidate('rosc-sustained', events, T0 + 600_000 + 20 * 60_000 - 1000).outcome,
-    ).toBeNull();
+  it('ROSC maintained 20 min is sustained (Utstein in-hospital, Nolan et al. 2019)', () => {
+    const s = state([ev('rosc', 600)]);
+    const twentyMin = T0 + 600_000 + 20 * 60_000;
+    expect(closingCandidate('rosc-sustained', s, ARREST, twentyMin).outcome).toBe('rosc-sustained');
+    expect(closingCandidate('rosc-sustained', s, ARREST, twentyMin - 1000).outcome).toBeNull();
   });
 
   it('stopped and transferred codes pre-fill their outcome', () => {
-    expect(closingCandidate('terminated', [], T0 + 1e6).outcome).toBe('died');
-    expect(closingCandidate('transferred', [], T0 + 1e6).outcome).toBe('transferred');
+    expect(closingCandidate('terminated', state([]), ARREST, T0 + 1e6).outcome).toBe('died');
+    expect(closingCandidate('transferred', state([]), ARREST, T0 + 1e6).outcome).toBe(
+      'transferred',
+    );
   });
 });
 
@@ -40,8 +40,8 @@ describe('endSummary', () => {
       ev('rearrest', 420),
       ev('rosc', 600),
     ];
-    expect(endSummary(inForce(events), T0)).toBeNull();
-    const s = endSummary(inForce([...events, ev('end', 900, { reason: 'rosc-sustained' })]), T0);
+    expect(endSummary(state(events), ARREST)).toBeNull();
+    const s = endSummary(state([...events, ev('end', 900, { reason: 'rosc-sustained' })]), ARREST);
     expect(s).toEqual({
       endedAtMs: T0 + 900_000,
       durationSec: 900,

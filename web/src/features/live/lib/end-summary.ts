@@ -1,6 +1,6 @@
+import { intervalsOf, type PatientStateInterval, sustainedRosc } from '@upstroke/capno';
 import { endReasonLabels, type PatchResuscitation } from '@upstroke/contracts';
-import type { LocalEvent } from '../../../lib/offline';
-import { phaseSpans, roscPeriods, SUSTAINED_ROSC_SEC } from './patient-phase';
+import type { LiveState } from './live-state';
 
 /** What the read-only summary of an ended code says (times in ms). */
 export interface EndSummary {
@@ -12,19 +12,31 @@ export interface EndSummary {
   epinephrineDoses: number;
 }
 
-/** The summary of a code from its events in force (sorted), or null while it runs. */
-export function endSummary(inForce: readonly LocalEvent[], arrestAtMs: number): EndSummary | null {
-  const end = inForce.find((e) => e.kind === 'end');
+/** The states up to `untilSec` (the open last one closed there). */
+function statesUntil(states: readonly PatientStateInterval[], untilSec: number) {
+  return states
+    .filter((s) => s.startSec < untilSec)
+    .map((s) => ({ ...s, endSec: Math.min(s.endSec, untilSec) }));
+}
+
+/** The summary of an ended code from its live state, or null while it runs. */
+export function endSummary(state: LiveState, arrestAt: string): EndSummary | null {
+  const end = state.inForce.find((e) => e.kind === 'end');
   if (!end) return null;
+  const zero = Date.parse(arrestAt);
   const endedAtMs = Date.parse(end.at);
   const reason = String((end.data as { reason?: string }).reason);
+  const rosc = intervalsOf(statesUntil(state.states, (endedAtMs - zero) / 1000), 'rosc');
   return {
     endedAtMs,
-    durationSec: (endedAtMs - arrestAtMs) / 1000,
+    durationSec: (endedAtMs - zero) / 1000,
     reason: endReasonLabels[reason] ?? reason,
-    roscPeriods: roscPeriods(phaseSpans(inForce), endedAtMs),
-    shocks: inForce.filter((e) => e.kind === 'shock').length,
-    epinephrineDoses: inForce.filter(
+    roscPeriods: rosc.map((r) => ({
+      fromMs: zero + r.startSec * 1000,
+      toMs: zero + r.endSec * 1000,
+    })),
+    shocks: state.shocks,
+    epinephrineDoses: state.inForce.filter(
       (e) => e.kind === 'drug' && (e.data as { drug?: string }).drug === 'epinephrine',
     ).length,
   };
@@ -34,27 +46,23 @@ type EndReason = NonNullable<PatchResuscitation['endReason']>;
 
 /**
  * The record's closing candidate from the End choice, for the lead to confirm in the
- * debrief. The outcome "sustained ROSC" is never taken from the tap: it is pre-filled only
- * when the recorded ROSC had lasted the Utstein 20 min at the end (Nolan et al. 2019);
- * otherwise a code ending in ROSC leaves the outcome for the lead.
+ * debrief. The outcome "sustained ROSC" is never taken from the tap: capno decides it from
+ * the states (Utstein in-hospital, Nolan et al. 2019: ROSC maintained ≥ 20 min); a code
+ * ending in a shorter ROSC leaves the outcome for the lead.
  */
 export function closingCandidate(
   reason: EndReason,
-  inForce: readonly LocalEvent[],
+  state: LiveState,
+  arrestAt: string,
   endedAtMs: number,
 ): PatchResuscitation {
-  const periods = roscPeriods(phaseSpans(inForce), endedAtMs);
-  const last = periods.at(-1);
-  const sustained =
-    last !== undefined &&
-    last.toMs === endedAtMs &&
-    (last.toMs - last.fromMs) / 1000 >= SUSTAINED_ROSC_SEC;
+  const states = statesUntil(state.states, (endedAtMs - Date.parse(arrestAt)) / 1000);
   const outcome: PatchResuscitation['outcome'] =
     reason === 'terminated'
       ? 'died'
       : reason === 'transferred'
         ? 'transferred'
-        : sustained
+        : sustainedRosc(states) === true
           ? 'rosc-sustained'
           : null;
   return { status: 'closed', endReason: reason, outcome };

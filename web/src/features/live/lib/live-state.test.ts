@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { cycleStart, liveState } from './live-state';
-import { ev, T0 } from './test-events';
+import { ARREST, ev, T0 } from './test-events';
 
 describe('liveState', () => {
   it('tracks compressions, epinephrine, rhythm checks and shocks in time order', () => {
@@ -12,7 +12,7 @@ describe('liveState', () => {
       ev('drug', 200, { drug: 'epinephrine', dose: 1, unit: 'mg' }),
       ev('drug', 230, { drug: 'amiodarone', dose: 300, unit: 'mg' }),
     ];
-    const s = liveState(events);
+    const s = liveState(events, ARREST);
     expect(s.phase).toBe('pulseless');
     expect(s.compressing).toBe(false);
     expect(s.compressionsChangedAt).toBe(T0 + 118_000);
@@ -26,7 +26,7 @@ describe('liveState', () => {
     const start = ev('compressions-start', 5);
     const shock = ev('shock', 60, { energyJ: 200 });
     const fix = ev('correction', 61, { supersedes: shock.id, reason: 'undo' });
-    const s = liveState([start, shock, fix]);
+    const s = liveState([start, shock, fix], ARREST);
     expect(s.shocks).toBe(0);
     expect(s.compressing).toBe(true);
     expect(s.inForce.map((e) => e.id)).toEqual([start.id]);
@@ -36,19 +36,19 @@ describe('liveState', () => {
     const rosc = ev('rosc', 300);
     const rearrest = ev('rearrest', 900);
     const base = [ev('compressions-start', 5), ev('rhythm', 240, { rhythm: 'vf' }), rosc];
-    expect(liveState(base)).toMatchObject({ phase: 'rosc', phaseSince: T0 + 300_000 });
-    const again = liveState([...base, rearrest]);
+    expect(liveState(base, ARREST)).toMatchObject({ phase: 'rosc', phaseSince: T0 + 300_000 });
+    const again = liveState([...base, rearrest], ARREST);
     expect(again).toMatchObject({ phase: 'pulseless', phaseSince: T0 + 900_000 });
     // The 2-min cycle counts from the re-arrest, not from the check before the ROSC.
     expect(cycleStart(again, T0)).toBe(T0 + 900_000);
-    const ended = liveState([...base, rearrest, ev('end', 1000, { reason: 'terminated' })]);
+    const ended = liveState([...base, rearrest, ev('end', 1000, { reason: 'terminated' })], ARREST);
     expect(ended).toMatchObject({ phase: 'ended', ended: true, endReason: 'terminated' });
   });
 
   it('an undone ROSC puts the patient back to pulseless', () => {
     const rosc = ev('rosc', 300);
-    const s = liveState([rosc, ev('correction', 302, { supersedes: rosc.id })]);
+    const s = liveState([rosc, ev('correction', 302, { supersedes: rosc.id })], ARREST);
     expect(s.phase).toBe('pulseless');
-    expect(s.phaseSince).toBeNull();
+    expect(s.phaseSince).toBe(T0);
   });
 });

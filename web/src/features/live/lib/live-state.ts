@@ -1,13 +1,19 @@
-import { eventsInForce } from '@upstroke/capno';
+import {
+  eventsInForce,
+  type PatientState,
+  type PatientStateInterval,
+  patientStates,
+} from '@upstroke/capno';
 import type { LocalEvent } from '../../../lib/offline';
-import { patientPhase, type PatientPhase } from './patient-phase';
 
 /** What the Live screen shows, derived from the tapped events (corrections applied). */
 export interface LiveState {
-  /** Where the patient is: prompts, timers, sounds and buttons follow it. */
-  phase: PatientPhase;
-  /** When the current phase began (ms): the ROSC clock, or a re-arrest's new cycle. */
-  phaseSince: number | null;
+  /** Where the patient is (capno's patient-state model): everything on Live follows it. */
+  phase: PatientState;
+  /** When the current state began (ms): the ROSC clock, or a re-arrest's new cycle. */
+  phaseSince: number;
+  /** The states of the code so far (seconds from the arrest; the last one open-ended). */
+  states: PatientStateInterval[];
   compressing: boolean;
   /** When compressions last started or stopped (ms), or null before the first tap. */
   compressionsChangedAt: number | null;
@@ -21,19 +27,27 @@ export interface LiveState {
   inForce: LocalEvent[];
 }
 
-export function liveState(events: LocalEvent[]): LiveState {
-  // Capno's correction rule, as the debrief applies it.
+export function liveState(events: LocalEvent[], arrestAt: string): LiveState {
+  // Capno's correction rule and patient-state model, as the debrief applies them.
   const live = eventsInForce(events);
-  const phase = patientPhase(live);
+  const zero = Date.parse(arrestAt);
+  const timed = live.map((e) => ({
+    tSec: (Date.parse(e.at) - zero) / 1000,
+    kind: e.kind,
+    data: e.data,
+  }));
+  const states = patientStates(timed, Infinity);
+  const current = states.at(-1) ?? { state: 'pulseless' as const, startSec: 0 };
   const state: LiveState = {
-    phase: phase.phase,
-    phaseSince: phase.since,
+    phase: current.state,
+    phaseSince: zero + current.startSec * 1000,
+    states,
     compressing: false,
     compressionsChangedAt: null,
     lastEpinephrineAt: null,
     lastRhythmCheckAt: null,
     shocks: 0,
-    ended: phase.phase === 'ended',
+    ended: current.state === 'ended',
     endReason: null,
     inForce: live,
   };
@@ -56,6 +70,5 @@ export function liveState(events: LocalEvent[]): LiveState {
  * current pulseless period (arrest or re-arrest), whichever is later.
  */
 export function cycleStart(state: LiveState, arrestAtMs: number): number {
-  const from = state.phaseSince ?? arrestAtMs;
-  return Math.max(state.lastRhythmCheckAt ?? arrestAtMs, from, arrestAtMs);
+  return Math.max(state.lastRhythmCheckAt ?? arrestAtMs, state.phaseSince, arrestAtMs);
 }

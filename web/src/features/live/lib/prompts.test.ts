@@ -2,12 +2,12 @@ import { thresholdDefaults } from '@upstroke/contracts';
 import { describe, expect, it } from 'vitest';
 import { liveState } from './live-state';
 import { livePrompts, roscPrompt } from './prompts';
-import { ev, T0 } from './test-events';
+import { ARREST, ev, T0 } from './test-events';
 
 const t = thresholdDefaults;
 const at = (events: Parameters<typeof liveState>[0], sec: number) =>
   livePrompts({
-    state: liveState(events),
+    state: liveState(events, ARREST),
     second: T0 / 1000 + sec,
     arrestAtMs: T0,
     thresholds: t,
@@ -36,7 +36,7 @@ describe('livePrompts', () => {
     expect(at(rosc, 110 + 6 * 60)).toEqual([roscPrompt.key]);
     // The engine's findings in progress are not shown either.
     const withEngine = livePrompts({
-      state: liveState(rosc),
+      state: liveState(rosc, ARREST),
       second: T0 / 1000 + 500,
       arrestAtMs: T0,
       thresholds: t,

@@ -34,7 +34,7 @@ export function livePrompts(input: {
   const prompts = [...input.engine];
   const stoppedAt = state.compressionsChangedAt;
   if (!state.compressing && stoppedAt !== null) {
-    const handsOff = second - Math.max(stoppedAt, state.phaseSince ?? 0) / 1000;
+    const handsOff = second - Math.max(stoppedAt, state.phaseSince) / 1000;
     if (handsOff > t.pauseMaxSec && !prompts.some((p) => p.key === 'pause-long'))
       prompts.push({
         key: 'hands-off',

@@ -2,6 +2,8 @@ import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
 
 /** Test entries of one record, `sec` seconds after 2026-03-04T10:00:00Z. */
 export const T0 = Date.UTC(2026, 2, 4, 10, 0, 0);
+/** The arrest time of these tests' record. */
+export const ARREST = new Date(T0).toISOString();
 export const atSec = (sec: number) => new Date(T0 + sec * 1000).toISOString();
 
 let n = 0;

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { liveState } from './live-state';
-import { ev, typed } from './test-events';
+import { ARREST, ev, typed } from './test-events';
 import { undoneIds, undoTarget } from './undo-target';
 
 const target = (events: Parameters<typeof liveState>[0], etco2: ReturnType<typeof typed>[]) =>
-  undoTarget(liveState(events).inForce, events, etco2);
+  undoTarget(liveState(events, ARREST).inForce, events, etco2);
 
 describe('undoTarget', () => {
   it('takes back a typed EtCO2 value typed after the last event, and names it', () => {
