@@ -1,6 +1,7 @@
 import { composeDebrief } from '@upstroke/capno';
 import type { Debrief, DebriefRecord } from '@upstroke/contracts';
-import { type LocalRecord, storedFromLocal } from '../../../lib/offline';
+// The mapping file itself (not the offline index): no IndexedDB code comes with it.
+import { type LocalRecord, storedFromLocal } from '../../../lib/offline/stored-record';
 
 export type { LocalRecord };
 
