@@ -13,6 +13,7 @@ module.exports = {
   moduleNameMapper: { '^(\\.{1,2}/(?!.*node_modules).*)\\.js$': '$1' },
   globalSetup: '<rootDir>/test/global-setup.ts',
   setupFiles: ['<rootDir>/test/setup-env.ts'],
-  testTimeout: 30000,
+  // Generous: a suite beside another test run on two cores can be slow; only a hang fails.
+  testTimeout: 60000,
   maxWorkers: 1,
 };

@@ -1,21 +1,23 @@
 // `npm test`: set-up on a throwaway database, then lint, type-check, unit and integration
 // suites and the browser end-to-end tests. Exits non-zero on any failure.
-import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { migrateAndSeed } from './lib/build.mjs';
 import { ensureDependencies } from './lib/deps.mjs';
-import { ensureDatabase, startCluster } from './lib/postgres.mjs';
+import { ensureDatabase } from './lib/postgres.mjs';
 import { aptInstall, capture, log, runAsync } from './lib/run.mjs';
 import { countsOf } from './lib/test-counts.mjs';
-import { waitForHttp } from './lib/wait.mjs';
+import { startTestApp, startTestCluster } from './lib/test-services.mjs';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const work = path.join(root, '.local', `test-${process.pid}`);
-const pgPort = Number(process.env.TEST_PG_PORT ?? 54339);
-const appPort = Number(process.env.TEST_PORT ?? 8091);
-const smtpPort = Number(process.env.TEST_SMTP_PORT ?? 2526);
+// Preferred ports; any that is taken (another run, `npm start`) is swapped for a free one.
+const preferredPorts = {
+  pg: Number(process.env.TEST_PG_PORT ?? 54339),
+  app: Number(process.env.TEST_PORT ?? 8091),
+  smtp: Number(process.env.TEST_SMTP_PORT ?? 2526),
+};
 const cleanups = [];
 const results = [];
 
@@ -48,28 +50,14 @@ async function step(name, cmd, args, options = {}) {
   return code === 0;
 }
 
-function startServer(env) {
-  const server = spawn('node', ['api/dist/src/main.js'], {
-    cwd: root,
-    env,
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
-  cleanups.push(() => server.kill('SIGTERM'));
-  return server;
-}
-
 async function main() {
   ensureDependencies(root);
   ensureSystemPackages();
   fs.mkdirSync(work, { recursive: true });
   cleanups.push(() => fs.rmSync(work, { recursive: true, force: true }));
-  const cluster = startCluster({
-    dataDir: path.join(work, 'pg'),
-    runDir: path.join(work, 'run'),
-    port: pgPort,
-    fast: true,
-  });
+  const cluster = await startTestCluster(root, work, preferredPorts.pg);
   cleanups.push(cluster.stop);
+  const pgPort = cluster.port;
   const databaseUrl = ensureDatabase({
     bin: cluster.bin,
     port: pgPort,
@@ -118,21 +106,24 @@ async function main() {
     },
   );
   if (built) {
-    const server = startServer({
+    const preferred = { app: preferredPorts.app, smtp: preferredPorts.smtp };
+    const server = await startTestApp(root, work, preferred, ({ app, smtp }) => ({
       ...process.env,
       NODE_ENV: 'production',
       LOG_LEVEL: 'warn',
-      PORT: String(appPort),
+      PORT: String(app),
       DATABASE_URL: databaseUrl,
       WEB_DIST: path.join(root, 'web', 'dist'),
-      SMTP_SINK_PORT: String(smtpPort),
-      SMTP_PORT: String(smtpPort),
-      PUBLIC_URL: `http://localhost:${appPort}`,
+      SMTP_SINK_PORT: String(smtp),
+      SMTP_PORT: String(smtp),
+      PUBLIC_URL: `http://localhost:${app}`,
       JWT_SECRET: 'e2e-secret',
       LOGIN_LIMIT_PER_MINUTE: '200',
-    });
-    const up = await waitForHttp(`http://127.0.0.1:${appPort}/api/health`, 30_000, server);
-    if (!up)
+    }));
+    cleanups.push(server.stop);
+    const { port: appPort, smtpPort } = server;
+    if (server.up) log(`the app for browser tests on :${appPort}, mail sink on :${smtpPort}`);
+    if (!server.up)
       results.push({
         name: 'start the app for end-to-end tests',
         ok: false,
@@ -140,7 +131,7 @@ async function main() {
         seconds: 0,
       });
     else {
-      await step(
+      const passed = await step(
         'end-to-end tests (playwright-core + Debian Chromium)',
         'node',
         [
@@ -167,6 +158,7 @@ async function main() {
           countsFile: out('e2e.tap'),
         },
       );
+      if (!passed) server.keep('the app under the browser tests');
     }
   } else {
     results.push({

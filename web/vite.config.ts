@@ -42,5 +42,9 @@ export default defineConfig({
     environment: 'jsdom',
     include: ['src/**/*.test.{ts,tsx}'],
     setupFiles: ['src/testing/setup.ts'],
+    // Component tests type and click through jsdom, which takes seconds on a busy machine:
+    // generous limits, so only a hang fails (time itself is tested with fake timers).
+    testTimeout: 60_000,
+    hookTimeout: 60_000,
   },
 });

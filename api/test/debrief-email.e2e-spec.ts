@@ -1,9 +1,10 @@
 import { SMTPServer } from 'smtp-server';
 import { OutboxRetryWorker } from '../src/modules/debrief-mail/outbox-retry.worker';
 import { signedRecord } from './debrief-fixtures';
+import { freePort } from './free-port';
 import { startTestApp, type TestApp } from './test-app';
 
-const PORT = 2531;
+let PORT = 0;
 
 /** A real SMTP server on loopback; `refuse` makes it answer 451 (temporary failure). */
 function smtpServer() {
@@ -39,6 +40,7 @@ describe('e-mailing the debrief', () => {
   let t: TestApp;
   const smtp = smtpServer();
   beforeAll(async () => {
+    PORT = await freePort();
     await new Promise<void>((resolve) => smtp.server.listen(PORT, '127.0.0.1', resolve));
     t = await startTestApp({
       smtp: { host: '127.0.0.1', port: PORT, from: 'Upstroke <no-reply@kestrel.test>' },

@@ -25,12 +25,17 @@ export async function launchBrowser(): Promise<{ browser: Browser; close: () => 
 }
 
 /** A tablet-sized context (landscape 1280×800) on the app under test. */
-export function newTabletContext(browser: Browser): Promise<BrowserContext> {
-  return browser.newContext({
+export async function newTabletContext(browser: Browser): Promise<BrowserContext> {
+  const context = await browser.newContext({
     baseURL: baseUrl,
     viewport: { width: 1280, height: 800 },
     serviceWorkers: 'allow',
   });
+  // Generous waits: beside another test run on two cores a page can take many seconds to
+  // settle. A step that never happens still fails, later.
+  context.setDefaultTimeout(60_000);
+  context.setDefaultNavigationTimeout(90_000);
+  return context;
 }
 
 /** Signs in through the real Sign in page, as a person would. */

@@ -85,7 +85,19 @@ export function startCluster({ dataDir, runDir, port, fast = false }) {
     asOwner(
       bin,
       'pg_ctl',
-      ['-D', dataDir, '-l', path.join(runDir, 'pg.log'), '-w', '-o', opts.join(' '), 'start'],
+      // Two minutes: a busy machine can be slow to bring up a fresh cluster.
+      [
+        '-D',
+        dataDir,
+        '-l',
+        path.join(runDir, 'pg.log'),
+        '-w',
+        '-t',
+        '120',
+        '-o',
+        opts.join(' '),
+        'start',
+      ],
       {
         stdio: ['ignore', 'ignore', 'inherit'],
       },

@@ -2,6 +2,7 @@ import type { SMTPServer } from 'smtp-server';
 import { startMailSink } from '../../src/modules/mail/mail-sink';
 import { plainTextOf } from '../../src/modules/admin-mail/mime-text';
 import type { LoginResponse } from '@upstroke/contracts';
+import { freePort } from '../free-port';
 import { demoPassword, startTestApp, type TestApp } from '../test-app';
 
 export interface AdminTestApp extends TestApp {
@@ -10,8 +11,9 @@ export interface AdminTestApp extends TestApp {
   linkTokenFor: (email: string) => Promise<string>;
 }
 
-/** The API with a local SMTP sink on its own port (this engineer's range 2540–2549). */
-export async function startAdminTestApp(smtpPort: number): Promise<AdminTestApp> {
+/** The API with a local SMTP sink on a free port. */
+export async function startAdminTestApp(): Promise<AdminTestApp> {
+  const smtpPort = await freePort();
   const base = await startTestApp({
     smtp: { host: '127.0.0.1', port: smtpPort, from: 'Upstroke <no-reply@kestrel.test>' },
     publicUrl: 'http://upstroke.test',

@@ -22,7 +22,7 @@ describe('admin scope: a site admin manages only their own site', () => {
   const ids: Record<string, string> = {};
 
   beforeAll(async () => {
-    t = await startAdminTestApp(2548);
+    t = await startAdminTestApp();
     org = await t.as('admin');
     const site = await t
       .http()

@@ -36,7 +36,7 @@ async function lowEtco2Record(t: AdminTestApp): Promise<string> {
 describe('admin: protocol profiles are versioned and records keep theirs', () => {
   let t: AdminTestApp;
   beforeAll(async () => {
-    t = await startAdminTestApp(2542);
+    t = await startAdminTestApp();
   });
   afterAll(() => t.close());
 

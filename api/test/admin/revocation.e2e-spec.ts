@@ -2,6 +2,7 @@ import request from 'supertest';
 import { createApp } from '../../src/app.factory';
 import { loadConfig } from '../../src/config';
 import { demoSiteId, demoUsers } from '../test-app';
+import { freePort } from '../free-port';
 import { type AdminTestApp, startAdminTestApp } from './admin-helpers';
 
 const userId = (role: string) => demoUsers.find((u) => u.role === role)!.id;
@@ -9,7 +10,7 @@ const userId = (role: string) => demoUsers.find((u) => u.role === role)!.id;
 describe('admin: deactivation, role changes, password resets and the last admin', () => {
   let t: AdminTestApp;
   beforeAll(async () => {
-    t = await startAdminTestApp(2541);
+    t = await startAdminTestApp();
   });
   afterAll(() => t.close());
 
@@ -115,11 +116,11 @@ describe('admin: deactivation, role changes, password resets and the last admin'
   });
 
   it('stores nothing when the invitation e-mail cannot be sent (503)', async () => {
-    // Port 2549 in this engineer's range has no SMTP server listening.
+    // A free port: no SMTP server listens there.
     const config = {
       ...loadConfig(),
       jwtSecret: 'test-secret',
-      smtp: { host: '127.0.0.1', port: 2549, from: 'x@kestrel.test' },
+      smtp: { host: '127.0.0.1', port: await freePort(), from: 'x@kestrel.test' },
     };
     const app = await createApp(config);
     await app.init();

@@ -7,7 +7,7 @@ const adminId = demoUsers.find((u) => u.role === 'admin')!.id;
 describe('admin: sites and units, audit log, mail viewer', () => {
   let t: AdminTestApp;
   beforeAll(async () => {
-    t = await startAdminTestApp(2543);
+    t = await startAdminTestApp();
   });
   afterAll(() => t.close());
 

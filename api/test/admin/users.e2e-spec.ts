@@ -6,7 +6,7 @@ const newcomer = { email: 'ash.penrose@kestrel.test', name: 'Ash Penrose (RN)', 
 describe('admin: users, invitations and passwords', () => {
   let t: AdminTestApp;
   beforeAll(async () => {
-    t = await startAdminTestApp(2540);
+    t = await startAdminTestApp();
   });
   afterAll(() => t.close());
 
