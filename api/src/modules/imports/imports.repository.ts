@@ -28,6 +28,11 @@ export interface ImportRow {
 export class ImportsRepository {
   constructor(@Inject(KNEX) private readonly db: Db) {}
 
+  /** Runs `work` in one transaction: the file's rows, samples and audit entry, or nothing. */
+  transaction<T>(work: (trx: Db) => Promise<T>): Promise<T> {
+    return this.db.transaction((trx) => work(trx));
+  }
+
   async listByResuscitation(resuscitationId: string): Promise<ImportRow[]> {
     return this.db<ImportRow>('imports').where({ resuscitationId }).orderBy('createdAt');
   }

@@ -1,11 +1,11 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
-import { Inject, Injectable } from '@nestjs/common';
-import { alignClocks, normalizeEvents } from '@upstroke/capno';
-import type { AnalysisEvent, List, MonitorImport } from '@upstroke/contracts';
+import { Injectable } from '@nestjs/common';
+import { alignClocks, eventsInForce } from '@upstroke/capno';
+import type { List, MonitorImport } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { badRequest, conflict, DomainError, notFound } from '../../common/errors';
-import { KNEX, type Db } from '../../db/knex';
+import type { Db } from '../../db/knex';
 import { AuditRepository } from '../audit/audit.repository';
 import { ClinicalDataRepository } from '../resuscitations/clinical-data.repository';
 import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
@@ -35,7 +35,6 @@ const isUniqueViolation = (e: unknown) => (e as { code?: string } | null)?.code 
 @Injectable()
 export class ImportsService {
   constructor(
-    @Inject(KNEX) private readonly db: Db,
     private readonly imports: ImportsRepository,
     private readonly data: ClinicalDataRepository,
     private readonly access: ResuscitationAccess,
@@ -58,7 +57,7 @@ export class ImportsService {
     const shocksSec = await this.recordedShocksSec(id);
     const importId = randomUUID();
     try {
-      const row = await this.db.transaction(async (trx) => {
+      const row = await this.imports.transaction(async (trx) => {
         const parsed = await parseMonitorFile(createReadStream(upload.path), (chunks) =>
           this.imports.insertChunks(
             chunks.map((c) => toChunkRow(c, id, importId)),
@@ -78,7 +77,7 @@ export class ImportsService {
   /** The lead's chosen offset: samples move with it, and who chose it is kept. */
   async setOffset(user: AuthUser, id: string, importId: string, offsetSec: number) {
     await this.access.writable(user, id);
-    const row = await this.db.transaction(async (trx) => {
+    const row = await this.imports.transaction(async (trx) => {
       const current = await this.imports.findById(id, importId, trx);
       if (!current) throw notFound('Import');
       // Aligned time = file time − offset, so a larger offset moves samples earlier.
@@ -106,14 +105,12 @@ export class ImportsService {
     return toMonitorImport(row);
   }
 
-  /** Shock times of the record (corrections applied), in epoch seconds. */
+  /** Shock times of the record (capno's correction rule), in epoch seconds. */
   private async recordedShocksSec(id: string): Promise<number[]> {
     const rows = await this.data.events(id);
-    const events = rows.map((e) => ({ ...e, at: e.at.toISOString() }) as unknown as AnalysisEvent);
-    const zero = '1970-01-01T00:00:00.000Z';
-    return normalizeEvents(zero, events)
+    return eventsInForce(rows.map((e) => ({ ...e, at: e.at.toISOString() })))
       .filter((e) => e.kind === 'shock')
-      .map((e) => e.tSec);
+      .map((e) => Date.parse(e.at) / 1000);
   }
 
   private async store(trx: Db, a: StoreArgs): Promise<ImportRow> {
