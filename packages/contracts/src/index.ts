@@ -11,3 +11,4 @@ export * from './debrief.js';
 export * from './admin.js';
 export * from './monitor.js';
 export * from './plausibility.js';
+export * from './live-feed.js';

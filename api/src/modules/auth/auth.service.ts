@@ -37,6 +37,15 @@ export class AuthService {
     return { accessToken: await this.jwt.signAsync(payload), user: toUser(user) };
   }
 
+  /** A bearer token's user (for the live feed's WebSocket), or null when it is not valid. */
+  async userForAccessToken(token: string): Promise<User | null> {
+    try {
+      return await this.userForToken(await this.jwt.verifyAsync<TokenPayload>(token));
+    } catch {
+      return null;
+    }
+  }
+
   /** Resolves a token's user; deactivated users and revoked tokens resolve to nothing. */
   async userForToken(payload: TokenPayload): Promise<User | null> {
     const user = await this.users.findWithSites(payload.sub);

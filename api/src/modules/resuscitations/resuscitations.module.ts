@@ -1,4 +1,7 @@
 import { Module } from '@nestjs/common';
+import { AuthModule } from '../auth/auth.module';
+import { LiveFeed } from './live-feed';
+import { LiveFeedGateway } from './live-feed.gateway';
 import { ClinicalDataRepository } from './clinical-data.repository';
 import { ResuscitationAccess } from './resuscitation-access';
 import { ResuscitationsController } from './resuscitations.controller';
@@ -7,6 +10,7 @@ import { ResuscitationsService } from './resuscitations.service';
 import { SyncService } from './sync.service';
 
 @Module({
+  imports: [AuthModule],
   controllers: [ResuscitationsController],
   providers: [
     ResuscitationsRepository,
@@ -14,6 +18,8 @@ import { SyncService } from './sync.service';
     ResuscitationAccess,
     ResuscitationsService,
     SyncService,
+    LiveFeed,
+    LiveFeedGateway,
   ],
   exports: [ResuscitationsRepository, ClinicalDataRepository, ResuscitationAccess],
 })

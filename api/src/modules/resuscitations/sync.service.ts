@@ -3,6 +3,7 @@ import type { BatchResult } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { AuditRepository } from '../audit/audit.repository';
 import { ClinicalDataRepository } from './clinical-data.repository';
+import { LiveFeed } from './live-feed';
 import { ResuscitationAccess } from './resuscitation-access';
 import { etco2Row, eventRow, type RowContext, type RowResult, waveformRow } from './sync-rows';
 
@@ -28,6 +29,7 @@ export class SyncService {
     private readonly data: ClinicalDataRepository,
     private readonly access: ResuscitationAccess,
     private readonly audit: AuditRepository,
+    private readonly feed: LiveFeed,
   ) {}
 
   events(user: AuthUser, id: string, items: unknown[], ctx: SyncContext): Promise<BatchResult> {
@@ -79,6 +81,8 @@ export class SyncService {
         if (!foreign.has(fid))
           rejected.push({ id: fid, reason: 'id: already used by another record' });
     }
+    // Other tablets showing this record hear at once (duplicates are harmless to them).
+    if (accepted > 0) this.feed.publish(id, table, own);
     if (accepted > 0) {
       await this.audit.insert({
         userId: user.id,

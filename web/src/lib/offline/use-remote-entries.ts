@@ -1,12 +1,17 @@
-import { useQuery } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { recordEntriesSchema } from '@upstroke/contracts';
-import { useRef, useSyncExternalStore } from 'react';
+import { useEffect, useRef, useState, useSyncExternalStore } from 'react';
 import { apiFetch } from '../api-client';
+import { authStore } from '../auth-store';
 import { offlineDb } from './db';
 import { syncEngine } from './engine-instance';
+import { openLiveFeed } from './live-feed';
 import { mergeRemoteEntries } from './pull';
 
-/** How often Live asks the server for other tablets' entries while it is open and online. */
+/**
+ * How often Live asks the server for other tablets' entries while it is open and online and
+ * the live feed is down (while the feed is up, the server pushes them as they arrive).
+ */
 export const PULL_INTERVAL_MS = 5000;
 /**
  * Each ask reaches back this far before the server's last answer: an entry is stamped when
@@ -27,6 +32,7 @@ export function useRemoteEntries(
   held: readonly (readonly { id: string }[])[],
 ): void {
   const { online } = useSyncExternalStore(syncEngine.subscribe, syncEngine.getState);
+  const pushed = useLiveFeed(resuscitationId, enabled && online);
   // Read when an answer arrives (every few seconds), not on every tap.
   const heldNow = useRef(held);
   heldNow.current = held;
@@ -47,8 +53,36 @@ export function useRemoteEntries(
       return added;
     },
     enabled: enabled && online,
-    refetchInterval: PULL_INTERVAL_MS,
+    refetchInterval: pushed ? false : PULL_INTERVAL_MS,
     retry: false,
     gcTime: 0,
   });
+}
+
+/**
+ * The server's live feed for this record: pushed entries go straight into the store (the
+ * screen's live queries redraw at once). True while subscribed; each new subscription asks
+ * once for what arrived while the feed was down.
+ */
+function useLiveFeed(resuscitationId: string, enabled: boolean): boolean {
+  const client = useQueryClient();
+  const [live, setLive] = useState(false);
+  useEffect(() => {
+    if (!enabled) return;
+    const close = openLiveFeed(resuscitationId, () => authStore.get()?.accessToken ?? null, {
+      onEntries: (entries) => void mergeRemoteEntries(offlineDb, resuscitationId, entries),
+      onLive: (up) => {
+        setLive(up);
+        if (up)
+          void client.invalidateQueries({
+            queryKey: ['resuscitations', resuscitationId, 'other-tablets'],
+          });
+      },
+    });
+    return () => {
+      close();
+      setLive(false);
+    };
+  }, [resuscitationId, enabled, client]);
+  return live;
 }
