@@ -40,12 +40,21 @@ describe('admin: protocol profiles are versioned and records keep theirs', () =>
   });
   afterAll(() => t.close());
 
-  const save = async (thresholds: Record<string, unknown>, name = 'Kestrel Bay 2026') =>
+  const save = async (
+    thresholds: Record<string, unknown>,
+    confirmations?: Record<string, unknown>,
+    name = 'Kestrel Bay 2026',
+  ) =>
     t
       .http()
       .post('/api/protocol-profiles')
       .set(...(await t.as('admin')))
-      .send({ siteId: demoSiteId, name, thresholds: { ...thresholdDefaults, ...thresholds } });
+      .send({
+        siteId: demoSiteId,
+        name,
+        thresholds: { ...thresholdDefaults, ...thresholds },
+        confirmations,
+      });
   const debrief = async (id: string) =>
     (
       await t
@@ -61,7 +70,11 @@ describe('admin: protocol profiles are versioned and records keep theirs', () =>
     expect(old.profile).toMatchObject({ version: 1, thresholds: { lowEtco2MmHg: 10 } });
     expect(old.findings.map((f) => f.kind)).toContain('etco2-low');
 
-    const saved = await save({ lowEtco2MmHg: 3 });
+    // 3 mmHg is more than 2× below the default: saved only with a confirmation and a reason.
+    const saved = await save(
+      { lowEtco2MmHg: 3 },
+      { lowEtco2MmHg: { confirmed: true, reason: 'Local audit trial 2026' } },
+    );
     expect(saved.status).toBe(201);
     expect(saved.body).toMatchObject({ version: 2, thresholds: { lowEtco2MmHg: 3 } });
 
@@ -81,7 +94,11 @@ describe('admin: protocol profiles are versioned and records keep theirs', () =>
       .set(...(await t.as('admin')));
     expect(list.body.items.map((p: { version: number }) => p.version)).toEqual([2, 1]);
     const audit = await t.db('auditLog').where({ action: 'profile.create' }).first();
-    expect(audit.details).toMatchObject({ version: 2, changed: ['lowEtco2MmHg'] });
+    expect(audit.details).toMatchObject({
+      version: 2,
+      changed: ['lowEtco2MmHg'],
+      changes: { lowEtco2MmHg: { from: 10, to: 3, reason: 'Local audit trial 2026' } },
+    });
   });
 
   it('the database refuses to edit a saved version', async () => {
@@ -124,5 +141,62 @@ describe('admin: protocol profiles are versioned and records keep theirs', () =>
       .set(...(await t.as('admin')))
       .send({ siteId: randomUUID(), name: 'x', thresholds: thresholdDefaults });
     expect(res.status).toBe(403);
+  });
+  const profileCount = async () =>
+    Number((await t.db('protocolProfiles').count<{ c: string }[]>({ c: '*' }))[0].c);
+
+  it('refuses paediatric epinephrine 1 mg/kg (100× the guideline) with 400 naming the field', async () => {
+    const n = await profileCount();
+    // AHA paediatric drug table (Kleinman 2010, Table 1; AHA 2020 keeps it): 0.01 mg/kg IV/IO.
+    const res = await save(
+      { paediatricEpinephrineMgPerKg: 1 },
+      { paediatricEpinephrineMgPerKg: { confirmed: true, reason: 'typo test' } },
+    );
+    expect(res.status).toBe(400);
+    expect(res.body.details[0]).toEqual({
+      path: 'thresholds.paediatricEpinephrineMgPerKg',
+      message: 'Epinephrine dose must be between 0.001 mg/kg and 0.1 mg/kg',
+    });
+    expect(await profileCount()).toBe(n);
+  });
+
+  it('asks for a confirmation and a reason for 0.03 mg/kg, then keeps the reason and old → new in the audit', async () => {
+    const n = await profileCount();
+    const bare = await save({ paediatricEpinephrineMgPerKg: 0.03 });
+    expect(bare.status).toBe(400);
+    expect(bare.body.details).toEqual([
+      {
+        path: 'confirmations.paediatricEpinephrineMgPerKg',
+        message:
+          'Epinephrine dose: 0.03 mg/kg is more than 2 times away from the guideline default (0.01 mg/kg). Confirm it and give a local source or reason.',
+      },
+    ]);
+    const noReason = await save(
+      { paediatricEpinephrineMgPerKg: 0.03 },
+      { paediatricEpinephrineMgPerKg: { confirmed: true, reason: ' ' } },
+    );
+    expect(noReason.status).toBe(400);
+    expect(noReason.body.details[0].path).toBe('confirmations.paediatricEpinephrineMgPerKg.reason');
+    expect(await profileCount()).toBe(n);
+
+    const ok = await save(
+      { paediatricEpinephrineMgPerKg: 0.03, paediatricFirstShockJPerKg: 4 },
+      { paediatricEpinephrineMgPerKg: { confirmed: true, reason: 'Pharmacy protocol PX-12' } },
+    );
+    expect(ok.status).toBe(201);
+    expect(ok.body.localSources).toEqual({
+      paediatricEpinephrineMgPerKg: 'Pharmacy protocol PX-12',
+    });
+    const audit = await t
+      .db('auditLog')
+      .where({ action: 'profile.create', entityId: ok.body.id })
+      .first();
+    // ERC 2021 paediatric (summary): 4 J/kg for every shock — within 2× of 2 J/kg, no reason needed.
+    expect(audit.details.changes).toEqual({
+      // Back to the default from the 3 mmHg of the first test's version.
+      lowEtco2MmHg: { from: 3, to: 10 },
+      paediatricEpinephrineMgPerKg: { from: 0.01, to: 0.03, reason: 'Pharmacy protocol PX-12' },
+      paediatricFirstShockJPerKg: { from: 2, to: 4 },
+    });
   });
 });

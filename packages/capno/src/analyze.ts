@@ -1,4 +1,5 @@
 import type {
+  AgeGroup,
   AnalysisInput,
   AnalysisOutput,
   Breath,
@@ -6,6 +7,7 @@ import type {
   Interval,
   Thresholds,
 } from '@upstroke/contracts';
+import { thresholdsForAgeGroup } from './age-rules.js';
 import { detectBreaths } from './breaths/breath-detector.js';
 import { etco2Measures, stepSegments } from './etco2/segments.js';
 import { etco2Series } from './etco2/series.js';
@@ -26,6 +28,8 @@ export interface CoreInput {
   waveformCoverage: readonly Interval[];
   endSec: number;
   live?: boolean;
+  /** Default adult; child and infant records use the profile's paediatric rules. */
+  ageGroup?: AgeGroup;
   /**
    * Live refresh: only findings still running at or after this time are wanted, so rules
    * read recent EtCO2 values, breaths and pauses only (a look-back long enough for every
@@ -67,7 +71,8 @@ export function ventilationRate(breaths: readonly Breath[], maxGapSec: number): 
 }
 
 /** Measures and findings from events, the EtCO2 series and breaths. */
-export function analyzeCore(c: CoreInput): AnalysisOutput {
+export function analyzeCore(core: CoreInput): AnalysisOutput {
+  const c = { ...core, thresholds: thresholdsForAgeGroup(core.thresholds, core.ageGroup) };
   const end = c.endSec;
   const from = c.activeFrom ?? -Infinity;
   const tl = buildTimeline(c.events, end);
@@ -95,6 +100,7 @@ export function analyzeCore(c: CoreInput): AnalysisOutput {
       .map((w) => ({ startSec: Math.max(w.startSec, watchFrom), endSec: w.endSec })),
     live: c.live ?? false,
     from,
+    ageGroup: c.ageGroup ?? 'adult',
   }).map((f) => ({ ...f, startSec: Math.min(f.startSec, end), endSec: Math.min(f.endSec, end) }));
   return {
     measures: {
@@ -146,5 +152,6 @@ export function analyze(input: AnalysisInput): AnalysisOutput {
     breaths,
     waveformCoverage: coverage,
     endSec: recordEnd(events, points, coverage),
+    ageGroup: input.ageGroup,
   });
 }

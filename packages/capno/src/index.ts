@@ -36,6 +36,7 @@ export {
 export { buildTimeline, type Timeline } from './events/timeline.js';
 export { CAUTION } from './findings/index.js';
 export { LiveAnalyzer, type LiveOptions } from './live/live-analyzer.js';
+export { adultEvidenceApplies, ageGroupRulesNote, thresholdsForAgeGroup } from './age-rules.js';
 export { resolveThresholds } from './profile.js';
 export { summarize } from './summary.js';
 export * from './debrief/index.js';

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { isoDateTimeSchema, roleSchema, uuidSchema } from './common.js';
 
 export * from './profile-fields.js';
+export * from './profile-guard.js';
 
 // ── Users ────────────────────────────────────────────────────────────────────────────────
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { co2UnitSchema, isoDateTimeSchema } from './common.js';
+import { ageGroupSchema, co2UnitSchema, isoDateTimeSchema } from './common.js';
 import { analysisEventSchema, endReasonSchema, rhythmSchema } from './events.js';
 import { profileInputSchema } from './profile.js';
 
@@ -32,6 +32,9 @@ export const analysisInputSchema = z.object({
   events: z.array(analysisEventSchema),
   etco2: z.array(analysisEtco2Schema).optional(),
   waveform: waveformSchema.optional(),
+  /** Default adult; child and infant records are analysed with the profile's paediatric rules. */
+  ageGroup: ageGroupSchema.optional(),
+  weightKg: z.number().positive().max(400).optional(),
 });
 export type AnalysisInput = z.infer<typeof analysisInputSchema>;
 

@@ -53,3 +53,7 @@ export const healthSchema = z.object({
   db: z.enum(['ok', 'down']),
 });
 export type Health = z.infer<typeof healthSchema>;
+
+/** Adult, child or infant: child and infant records use the profile's paediatric values. */
+export const ageGroupSchema = z.enum(['adult', 'child', 'infant']);
+export type AgeGroup = z.infer<typeof ageGroupSchema>;

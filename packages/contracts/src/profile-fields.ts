@@ -1,8 +1,9 @@
 import { z } from 'zod';
-import { uuidSchema } from './common.js';
+import { type PaediatricFieldGroup, paediatricFields } from './paediatric-profile.js';
 import { type Thresholds, thresholdsSchema } from './profile.js';
 
-export type ThresholdGroup = 'etco2' | 'cpr' | 'rhythm' | 'drugs' | 'ventilation' | 'paediatric';
+export type ThresholdGroup =
+  'etco2' | 'cpr' | 'rhythm' | 'drugs' | 'ventilation' | PaediatricFieldGroup;
 
 export interface ThresholdField {
   label: string;
@@ -18,7 +19,9 @@ export const thresholdGroupLabels: Record<ThresholdGroup, string> = {
   rhythm: 'Rhythm checks',
   drugs: 'Epinephrine',
   ventilation: 'Ventilation and waveform',
-  paediatric: 'Paediatric doses',
+  'paediatric-drugs': 'Children and infants: weight-based drug doses',
+  'paediatric-shocks': 'Children and infants: shock energies',
+  'paediatric-ventilation': 'Children and infants: ventilation',
 };
 
 /** Friendly labels and units for each threshold: the profile form, the PDF and the debrief. */
@@ -83,24 +86,7 @@ export const thresholdFields: Record<keyof Thresholds, ThresholdField> = {
     group: 'ventilation',
     step: 0.5,
   },
-  paediatricEpinephrineMgPerKg: {
-    label: 'Paediatric epinephrine dose',
-    unit: 'mg/kg',
-    group: 'paediatric',
-    step: 0.001,
-  },
-  paediatricFirstShockJPerKg: {
-    label: 'Paediatric first shock',
-    unit: 'J/kg',
-    group: 'paediatric',
-    step: 0.5,
-  },
-  paediatricLaterShockJPerKg: {
-    label: 'Paediatric later shocks',
-    unit: 'J/kg',
-    group: 'paediatric',
-    step: 0.5,
-  },
+  ...paediatricFields,
 };
 
 export const thresholdKeys = Object.keys(thresholdFields) as (keyof Thresholds)[];
@@ -139,16 +125,3 @@ export const thresholdsInputSchema = z
     path: ['epinephrineMaxSec'],
     error: 'The longest epinephrine interval must not be shorter than the shortest',
   });
-
-export const createProfileVersionSchema = z
-  .object({
-    siteId: uuidSchema,
-    name: z
-      .string()
-      .trim()
-      .min(1, { error: 'Give the profile a name' })
-      .max(120, { error: 'Keep the name under 120 characters' }),
-    thresholds: thresholdsInputSchema,
-  })
-  .strict();
-export type CreateProfileVersion = z.infer<typeof createProfileVersionSchema>;

@@ -1,5 +1,10 @@
 import { z } from 'zod';
 import { isoDateTimeSchema, uuidSchema } from './common.js';
+import {
+  paediatricDefaults,
+  paediatricSources,
+  paediatricThresholdsShape,
+} from './paediatric-profile.js';
 
 /**
  * Every threshold the analysis uses. Defaults are published guideline values (shared
@@ -27,9 +32,7 @@ export const thresholdsSchema = z
     waveformAbsentSec: z.number().min(5).max(600),
     rebreathingBaselineMmHg: z.number().min(0.5).max(20),
     compressionFractionTarget: z.number().min(0).max(1),
-    paediatricEpinephrineMgPerKg: z.number().min(0).max(1),
-    paediatricFirstShockJPerKg: z.number().min(0).max(10),
-    paediatricLaterShockJPerKg: z.number().min(0).max(10),
+    ...paediatricThresholdsShape,
   })
   .refine((t) => t.epinephrineMinSec <= t.epinephrineMaxSec, {
     path: ['epinephrineMaxSec'],
@@ -57,11 +60,9 @@ export const thresholdDefaults: Thresholds = {
   ventilationMaxPerMin: 10, // AHA 2020: 1 breath every 6 s with an advanced airway
   ventilationTolerancePerMin: 2, // common practice
   waveformAbsentSec: 30, // PRODUCT.md rule: common practice
-  rebreathingBaselineMmHg: 2, // secondary source, cut-off from memory
+  rebreathingBaselineMmHg: 2, // secondary source; the 2 mmHg cut-off is from memory
   compressionFractionTarget: 0.8, // Meaney 2013 goal (> 80 %)
-  paediatricEpinephrineMgPerKg: 0.01, // AHA 2020 paediatric (memory)
-  paediatricFirstShockJPerKg: 2, // AHA 2020 paediatric (memory)
-  paediatricLaterShockJPerKg: 4, // AHA 2020 paediatric (memory)
+  ...paediatricDefaults,
 };
 
 /** Where each default comes from, shown beside the field on the Admin screen. */
@@ -84,11 +85,9 @@ export const thresholdSources: Record<keyof Thresholds, string> = {
   ventilationMaxPerMin: 'AHA 2020 (1 breath every 6 s with an advanced airway)',
   ventilationTolerancePerMin: 'Common practice',
   waveformAbsentSec: 'Common practice',
-  rebreathingBaselineMmHg: 'Secondary source; cut-off from memory',
+  rebreathingBaselineMmHg: 'Common practice (no published cut-off)',
   compressionFractionTarget: 'Meaney 2013 (goal > 80 %)',
-  paediatricEpinephrineMgPerKg: 'AHA 2020 paediatric guideline (from memory)',
-  paediatricFirstShockJPerKg: 'AHA 2020 paediatric guideline (from memory)',
-  paediatricLaterShockJPerKg: 'AHA 2020 paediatric guideline (from memory)',
+  ...paediatricSources,
 };
 
 /** A partial profile as the analysis input accepts it; missing values take the defaults. */
@@ -107,6 +106,8 @@ export const protocolProfileSchema = z.object({
   version: z.number().int().positive(),
   name: z.string().min(1).max(120),
   thresholds: thresholdsSchema,
+  /** Local source or reason for each value saved far from its guideline default. */
+  localSources: z.record(z.string(), z.string()).optional(),
   createdAt: isoDateTimeSchema,
   createdBy: z.string().nullable(),
 });

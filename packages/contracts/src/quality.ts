@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { findingKindSchema } from './analysis.js';
-import { isoDateSchema, isoDateTimeSchema, uuidSchema } from './common.js';
-import { ageGroupSchema, outcomeSchema } from './resuscitations.js';
+import { ageGroupSchema, isoDateSchema, isoDateTimeSchema, uuidSchema } from './common.js';
+import { outcomeSchema } from './resuscitations.js';
 import { endReasonSchema, rhythmSchema } from './events.js';
 
 /**

@@ -1,12 +1,10 @@
 import { z } from 'zod';
-import { co2UnitSchema, isoDateTimeSchema, uuidSchema } from './common.js';
+import { ageGroupSchema, co2UnitSchema, isoDateTimeSchema, uuidSchema } from './common.js';
 import { arrestTimeProblem, PLAUSIBLE } from './plausibility.js';
 import { etco2SourceSchema } from './analysis.js';
 import { endReasonSchema, eventKindSchema, rhythmSchema } from './events.js';
 import { rosterSchema } from './site-context.js';
 
-export const ageGroupSchema = z.enum(['adult', 'child', 'infant']);
-export type AgeGroup = z.infer<typeof ageGroupSchema>;
 export const resuscitationStatusSchema = z.enum(['open', 'closed', 'signed']);
 export type ResuscitationStatus = z.infer<typeof resuscitationStatusSchema>;
 

@@ -9,6 +9,7 @@ export interface ProfileRow {
   version: number;
   name: string;
   thresholds: Partial<Thresholds>;
+  localSources: Record<string, string> | null;
   createdAt: Date;
   createdBy: string | null;
 }
@@ -50,7 +51,10 @@ export class ProfilesRepository {
   }
 
   async insertVersion(
-    row: Pick<ProfileRow, 'siteId' | 'version' | 'name' | 'createdBy'> & { thresholds: Thresholds },
+    row: Pick<ProfileRow, 'siteId' | 'version' | 'name' | 'createdBy'> & {
+      thresholds: Thresholds;
+      localSources: Record<string, string>;
+    },
     trx: Db,
   ): Promise<string> {
     const id = randomUUID();
@@ -58,6 +62,7 @@ export class ProfilesRepository {
       id,
       ...row,
       thresholds: JSON.stringify(row.thresholds),
+      localSources: JSON.stringify(row.localSources),
     });
     return id;
   }

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import {
   type CreateProfileVersion,
   type List,
+  localSourcesOf,
   type ProtocolProfile,
   type Thresholds,
   thresholdDefaults,
@@ -21,6 +22,7 @@ export function toProfile(row: ProfileRow): ProtocolProfile {
     name: row.name,
     // Versions saved before a threshold existed read it at its default.
     thresholds: { ...thresholdDefaults, ...row.thresholds },
+    localSources: row.localSources ?? {},
     createdAt: row.createdAt.toISOString(),
     createdBy: row.createdBy,
   };
@@ -53,16 +55,21 @@ export class ProfilesService {
   ): Promise<ProtocolProfile> {
     if (!canSeeSite(admin, body.siteId))
       throw forbidden('You can change profiles only of sites you manage');
+    const { siteId, name, thresholds } = body;
+    const version = { siteId, name, thresholds, localSources: localSourcesOf(body) };
     const id = await this.profiles.inTransaction((trx) =>
-      this.saveVersion(admin, body, deviceId, trx),
+      this.saveVersion(admin, version, deviceId, trx),
     );
     return toProfile((await this.profiles.findById(id)) as ProfileRow);
   }
 
-  /** Inside the caller's transaction (a new site saves its first version this way too). */
+  /**
+   * Inside the caller's transaction (a new site saves its first version this way too). The
+   * audit entry records every changed value as old → new (from null on a first version).
+   */
   async saveVersion(
     admin: AuthUser,
-    body: { siteId: string; name: string; thresholds: Thresholds },
+    body: { siteId: string; name: string; thresholds: Thresholds; localSources?: LocalSources },
     deviceId: string | undefined,
     trx: Db,
   ): Promise<string> {
@@ -70,11 +77,13 @@ export class ProfilesService {
     const before =
       previous > 0 ? await this.profiles.findVersion(body.siteId, previous, trx) : undefined;
     const version = previous + 1;
-    const id = await this.profiles.insertVersion({ ...body, version, createdBy: admin.id }, trx);
-    const old = before ? toProfile(before).thresholds : undefined;
-    const changed = old
-      ? thresholdKeys.filter((k) => old[k] !== body.thresholds[k])
-      : thresholdKeys;
+    const localSources = body.localSources ?? {};
+    const { siteId, name, thresholds } = body;
+    const id = await this.profiles.insertVersion(
+      { siteId, name, thresholds, localSources, version, createdBy: admin.id },
+      trx,
+    );
+    const changes = profileChanges(before ? toProfile(before) : undefined, body, localSources);
     await this.audit.insert(
       {
         userId: admin.id,
@@ -82,10 +91,30 @@ export class ProfilesService {
         entity: 'protocol-profile',
         entityId: id,
         deviceId,
-        details: { siteId: body.siteId, version, changed },
+        details: { siteId: body.siteId, version, changed: Object.keys(changes), changes },
       },
       trx,
     );
     return id;
   }
+}
+
+type LocalSources = Partial<Record<keyof Thresholds, string>>;
+
+/** Each changed threshold (or local reason) as { from, to, reason? }; all of them on a first version. */
+export function profileChanges(
+  old: ProtocolProfile | undefined,
+  body: { thresholds: Thresholds },
+  localSources: LocalSources,
+): Record<string, { from: number | null; to: number; reason?: string }> {
+  const out: Record<string, { from: number | null; to: number; reason?: string }> = {};
+  for (const k of thresholdKeys) {
+    const from = old ? old.thresholds[k] : null;
+    const to = body.thresholds[k];
+    const reason = localSources[k];
+    const oldReason = old?.localSources?.[k];
+    if (from === to && reason === oldReason) continue;
+    out[k] = reason ? { from, to, reason } : { from, to };
+  }
+  return out;
 }

@@ -66,6 +66,9 @@ export function analyseStored(stored: StoredRecord): StoredAnalysis {
     // Per-breath values read off the same capnogram are not counted twice (capno's rule).
     etco2: valuesBesideWaveform(etco2, waveform),
     waveform,
+    // Child and infant records are analysed with the profile's paediatric rules.
+    ageGroup: stored.ageGroup ?? undefined,
+    weightKg: stored.weightKg && stored.weightKg <= 400 ? stored.weightKg : undefined,
   };
   return { input, output: analyze(input), profile, waveform };
 }

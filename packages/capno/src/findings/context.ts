@@ -1,4 +1,5 @@
 import type {
+  AgeGroup,
   Breath,
   Etco2Point,
   Finding,
@@ -31,6 +32,8 @@ export interface FindingContext {
   from: number;
   /** All EtCO2 values, for rules that look far back (prognosis) when `points` is a recent tail. */
   allPoints: readonly Etco2Point[];
+  /** Child and infant records: rules whose evidence is adult-only are not applied. */
+  ageGroup: AgeGroup;
 }
 
 /** Shown with every finding: Upstroke supports documentation and review, never treatment. */

@@ -1,3 +1,4 @@
+import { adultEvidenceApplies } from '../age-rules.js';
 import type { Etco2Point, Finding, Interval } from '@upstroke/contracts';
 import { intersect, mergeClose } from '../events/intervals.js';
 import { MAX_HOLD_SEC } from '../etco2/segments.js';
@@ -96,9 +97,11 @@ export function riseFindings(c: FindingContext): Finding[] {
  * `etco2-prognosis-caution`: median EtCO2 over the last 60 s still below
  * `prognosisEtco2MmHg` once `prognosisAfterSec` of CPR (from the first compressions) have
  * passed with an advanced airway in place and no ROSC. Paiva 2018: ROSC very unlikely —
- * one input among several, never a reason on its own. Info.
+ * one input among several, never a reason on its own. Info. Adult records only: that
+ * evidence is adult, and no EtCO2 cut-off is validated for children (AHA 2020 paediatric).
  */
 export function prognosisFindings(c: FindingContext): Finding[] {
+  if (!adultEvidenceApplies(c.ageGroup)) return [];
   const cpr0 = c.tl.compressions[0]?.startSec;
   const airway = c.tl.advancedAirway[0]?.startSec;
   if (cpr0 === undefined || airway === undefined) return [];

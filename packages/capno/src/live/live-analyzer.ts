@@ -1,4 +1,5 @@
 import type {
+  AgeGroup,
   AnalysisEtco2,
   AnalysisEvent,
   AnalysisOutput,
@@ -23,6 +24,8 @@ export interface LiveOptions {
   unit: Co2Unit;
   barometricMmHg?: number;
   profile?: ProfileInput;
+  /** Child and infant records use the profile's paediatric rules (default adult). */
+  ageGroup?: AgeGroup;
 }
 
 /**
@@ -35,6 +38,7 @@ export class LiveAnalyzer {
   private readonly arrestAt: string;
   private readonly scale: number;
   private readonly thresholds: Thresholds;
+  private readonly ageGroup: AgeGroup | undefined;
   private readonly detector: BreathDetector;
   private started = false;
   private readonly coverage: Interval[] = [];
@@ -46,6 +50,7 @@ export class LiveAnalyzer {
     this.arrestAt = o.arrestAt;
     this.scale = mmHgFactor(o.unit, o.barometricMmHg);
     this.thresholds = resolveThresholds(o.profile);
+    this.ageGroup = o.ageGroup;
     this.detector = new BreathDetector(o.sampleRateHz);
   }
 
@@ -106,6 +111,7 @@ export class LiveAnalyzer {
       endSec,
       live,
       activeFrom,
+      ageGroup: this.ageGroup,
     });
   }
 

@@ -7,6 +7,7 @@ import { ErrorState } from '../../../components/ui/states';
 import { exportAudit } from '../api/export-audit';
 import { type AuditFilters, useAudit } from '../api/list-audit';
 import { apiErrorText } from './api-error';
+import { auditDetailsText } from './audit-details';
 import { AuditFilterBar } from './audit-filters';
 
 const columns: GridColDef<AuditEntry>[] = [
@@ -38,7 +39,7 @@ const columns: GridColDef<AuditEntry>[] = [
     flex: 1,
     minWidth: 200,
     sortable: false,
-    valueGetter: (_v, r) => JSON.stringify(r.details),
+    valueGetter: (_v, r) => auditDetailsText(r.action, r.details),
   },
 ];
 

@@ -16,7 +16,8 @@ function renderForm() {
   );
 }
 
-describe('ProfileForm', () => {
+// A form of some forty fields: role queries walk the whole tree, slow on a loaded machine.
+describe('ProfileForm', { timeout: 60_000 }, () => {
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows each guideline default with its source beside the field', () => {
@@ -68,5 +69,46 @@ describe('ProfileForm', () => {
       thresholds: { ...thresholdDefaults, lowEtco2MmHg: 12 },
     });
     expect(await screen.findByText('Saved as version 2.')).toBeInTheDocument();
+  });
+
+  it('marks a changed value and asks for a confirmation and a reason beyond 2× the default', async () => {
+    const fetchMock = vi.fn(async (_url: string, init: RequestInit) => {
+      const body = JSON.parse(String(init.body)) as object;
+      const saved = { id: siteId, version: 3, createdAt: '2026-03-04T10:00:00Z', createdBy: null };
+      return new Response(JSON.stringify({ ...body, ...saved }), { status: 201 });
+    });
+    vi.stubGlobal('fetch', fetchMock);
+    renderForm();
+    // AHA paediatric drug table (Kleinman 2010, Table 1): epinephrine 0.01 mg/kg IV/IO.
+    const epi = screen.getByRole('spinbutton', { name: 'Epinephrine dose' });
+    expect(screen.queryByText(/Differs from the guideline default/)).not.toBeInTheDocument();
+    await userEvent.clear(epi);
+    await userEvent.type(epi, '0.015');
+    expect(screen.getByText('Differs from the guideline default (0.01 mg/kg)')).toBeInTheDocument();
+    expect(screen.queryByRole('checkbox')).not.toBeInTheDocument();
+    await userEvent.clear(epi);
+    await userEvent.type(epi, '0.03');
+    const confirm = screen.getByRole('checkbox', { name: /I confirm 0.03 mg\/kg/ });
+    await userEvent.click(screen.getByRole('button', { name: 'Save as new version' }));
+    expect(await screen.findByText('Tick the box to confirm this value')).toBeInTheDocument();
+    expect(fetchMock).not.toHaveBeenCalled();
+    await userEvent.click(confirm);
+    await userEvent.type(
+      screen.getByRole('textbox', { name: 'Local source or reason for Epinephrine dose' }),
+      'Pharmacy protocol PX-12',
+    );
+    await userEvent.click(screen.getByRole('button', { name: 'Save as new version' }));
+    await waitFor(() => expect(fetchMock).toHaveBeenCalledTimes(1));
+    expect(JSON.parse(String(fetchMock.mock.calls[0][1].body))).toMatchObject({
+      thresholds: { paediatricEpinephrineMgPerKg: 0.03 },
+      confirmations: {
+        paediatricEpinephrineMgPerKg: { confirmed: true, reason: 'Pharmacy protocol PX-12' },
+      },
+    });
+  });
+
+  it('never shows "from memory" as a source', () => {
+    renderForm();
+    expect(screen.queryByText(/memory/i)).not.toBeInTheDocument();
   });
 });

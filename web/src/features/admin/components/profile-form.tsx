@@ -1,21 +1,22 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { Alert, Box, Button, InputAdornment, Stack, TextField, Typography } from '@mui/material';
+import { Alert, Box, Button, Stack, TextField, Typography } from '@mui/material';
 import {
-  type CreateProfileVersion,
-  createProfileVersionSchema,
   type ProtocolProfile,
   type ThresholdGroup,
-  thresholdDefaults,
   thresholdFields,
   thresholdGroupLabels,
   thresholdKeys,
-  thresholdRange,
-  thresholdSources,
 } from '@upstroke/contracts';
 import { useForm } from 'react-hook-form';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 import { useCreateProfile } from '../api/create-profile';
 import { apiErrorText } from './api-error';
+import { ProfileField } from './profile-field';
+import {
+  initialValues,
+  profileBody,
+  profileResolver,
+  type ProfileFormValues,
+} from './profile-form-values';
 
 const groups = Object.keys(thresholdGroupLabels) as ThresholdGroup[];
 
@@ -30,16 +31,14 @@ export function ProfileForm({
   onSaved: (p: ProtocolProfile) => void;
 }) {
   const create = useCreateProfile();
-  const { register, handleSubmit, reset, formState } = useForm<CreateProfileVersion>({
-    resolver: zodResolver(createProfileVersionSchema),
-    values: {
-      siteId,
-      name: basis?.name ?? 'Guideline defaults',
-      thresholds: basis?.thresholds ?? thresholdDefaults,
-    },
+  const form = useForm<ProfileFormValues>({
+    resolver: profileResolver,
+    values: initialValues(siteId, basis),
   });
-  const submit = handleSubmit((body) => create.mutate(body, { onSuccess: onSaved }));
-  const errors = formState.errors.thresholds;
+  const { register, handleSubmit, reset, formState } = form;
+  const submit = handleSubmit((values) =>
+    create.mutate(profileBody(values), { onSuccess: onSaved }),
+  );
   return (
     <Box component="form" noValidate onSubmit={(e) => void submit(e)} aria-label="Protocol profile">
       <Stack spacing={2}>
@@ -65,39 +64,14 @@ export function ProfileForm({
             >
               {thresholdKeys
                 .filter((k) => thresholdFields[k].group === group)
-                .map((key) => {
-                  const { label, unit, step } = thresholdFields[key];
-                  const { min, max } = thresholdRange(key);
-                  const error = errors?.[key]?.message;
-                  return (
-                    <TextField
-                      key={key}
-                      label={label}
-                      type="number"
-                      {...register(`thresholds.${key}`, { valueAsNumber: true })}
-                      error={Boolean(error)}
-                      helperText={
-                        error ??
-                        `Default ${thresholdDefaults[key]} ${unit} — ${thresholdSources[key]}`
-                      }
-                      slotProps={{
-                        htmlInput: { step, min, max },
-                        input: unit
-                          ? { endAdornment: <InputAdornment position="end">{unit}</InputAdornment> }
-                          : undefined,
-                      }}
-                    />
-                  );
-                })}
+                .map((key) => (
+                  <ProfileField key={key} name={key} form={form} />
+                ))}
             </Box>
           </Box>
         ))}
         <Stack direction="row" spacing={1} sx={{ justifyContent: 'flex-end' }}>
-          <Button
-            onClick={() =>
-              reset({ siteId, name: 'Guideline defaults', thresholds: thresholdDefaults })
-            }
-          >
+          <Button onClick={() => reset(initialValues(siteId, null))}>
             Fill in guideline defaults
           </Button>
           <Button type="submit" variant="contained" disabled={create.isPending}>

@@ -93,7 +93,12 @@ export function DebriefPage() {
         <MeasureCards measures={d.measures} />
       </Section>
       <Section title={`Findings (${d.findings.length})`}>
-        <FindingsList findings={d.findings} selected={selected} onSelect={select} />
+        <FindingsList
+          findings={d.findings}
+          selected={selected}
+          onSelect={select}
+          ageGroup={d.record.ageGroup}
+        />
       </Section>
       <Section title="Lead notes">
         <LeadNotes

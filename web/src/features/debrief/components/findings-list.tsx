@@ -1,5 +1,11 @@
-import { Chip, List, ListItemButton, ListItemText, Stack, Typography } from '@mui/material';
-import { clockFromArrest, type Finding, findingKindLabels } from '@upstroke/contracts';
+import { ageGroupRulesNote } from '@upstroke/capno';
+import { Alert, Chip, List, ListItemButton, ListItemText, Stack, Typography } from '@mui/material';
+import {
+  type AgeGroup,
+  clockFromArrest,
+  type Finding,
+  findingKindLabels,
+} from '@upstroke/contracts';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 
 const chipColor = { info: 'info', warning: 'warning', critical: 'error' } as const;
@@ -9,13 +15,32 @@ export function FindingsList(props: {
   findings: Finding[];
   selected: number | null;
   onSelect: (index: number) => void;
+  ageGroup?: AgeGroup | null;
 }) {
-  if (props.findings.length === 0)
-    return (
-      <Typography color="text.secondary">
-        No findings for this record with the site’s thresholds.
-      </Typography>
-    );
+  const note = ageGroupRulesNote(props.ageGroup);
+  return (
+    <Stack spacing={1}>
+      {note && (
+        <Alert severity="info" variant="outlined">
+          {note}
+        </Alert>
+      )}
+      {props.findings.length === 0 ? (
+        <Typography color="text.secondary">
+          No findings for this record with the site’s thresholds.
+        </Typography>
+      ) : (
+        <FindingItems {...props} />
+      )}
+    </Stack>
+  );
+}
+
+function FindingItems(props: {
+  findings: Finding[];
+  selected: number | null;
+  onSelect: (index: number) => void;
+}) {
   return (
     <List aria-label="Findings" disablePadding>
       {props.findings.map((f, i) => (
