@@ -11,6 +11,7 @@ export const LiveHeader = memo(function LiveHeader(props: {
   recordId: string;
   onDetails: () => void;
   onTeam: () => void;
+  onArrestTime?: () => void;
 }) {
   const [muted, setMuted] = useMuted();
   return (
@@ -32,6 +33,11 @@ export const LiveHeader = memo(function LiveHeader(props: {
       <Button variant="outlined" onClick={props.onTeam} sx={{ minHeight: 56 }}>
         Team
       </Button>
+      {props.onArrestTime && (
+        <Button variant="outlined" onClick={props.onArrestTime} sx={{ minHeight: 56 }}>
+          Arrest time
+        </Button>
+      )}
       {props.ended && (
         <Button
           component={Link}

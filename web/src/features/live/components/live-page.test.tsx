@@ -143,3 +143,30 @@ describe('Undo on Live', () => {
     expect(correction?.data.supersedes).toBe('9a8b7c6d-5e4f-4a3b-8c2d-1e0f9a8b7c6d');
   });
 });
+
+describe('Arrest time on Live', () => {
+  it('sets the arrest 5 min before Start as a correction with its reason; the clocks follow', async () => {
+    await seed([]);
+    renderLive();
+    const since = await screen.findByRole('timer', { name: 'Since arrest' });
+    expect(since).toHaveTextContent(/^12:0\d$/);
+    await userEvent.click(screen.getByRole('button', { name: 'Arrest time' }));
+    const dialog = screen.getByRole('dialog');
+    await userEvent.click(within(dialog).getByRole('button', { name: '5 min' }));
+    const save = within(dialog).getByRole('button', { name: 'Set arrest time' });
+    expect(save).toBeDisabled(); // a reason is required
+    await userEvent.type(within(dialog).getByLabelText(/Reason/), 'Collapse seen by the family');
+    await userEvent.click(save);
+    expect(await screen.findByText(/^17:0\d$/)).toBe(since);
+    const stored = await offlineDb.events.toArray();
+    const start = stored.find((e) => e.kind === 'arrest');
+    const fix = stored.find((e) => e.kind === 'correction');
+    expect(fix?.data).toMatchObject({
+      supersedes: start?.id,
+      reason: 'Collapse seen by the family',
+      replacement: { kind: 'arrest' },
+    });
+    const record = await offlineDb.resuscitations.get(id);
+    expect(Date.parse(record?.arrestAt ?? '') - Date.parse(start?.at ?? '')).toBe(-5 * 60_000);
+  });
+});

@@ -6,13 +6,16 @@ import type { LocalEtco2, LocalEvent, LocalResuscitation } from '../../../lib/of
 import { RosterDialog } from '../../board/components/roster-dialog';
 // Monitor link (issue 5): its panel renders here, beside the EtCO2 trend.
 import { MonitorPanel } from '../../monitor/components/monitor-panel';
+import { useArrestTime } from '../hooks/use-arrest-time';
 import { useLiveActions } from '../hooks/use-live-actions';
 import { type useLiveRecord, useSiteSettings } from '../hooks/use-live-record';
 import { useNow } from '../hooks/use-now';
 import { usePrompts } from '../hooks/use-prompts';
+import { startArrest } from '../lib/arrest-time';
 import type { LiveState } from '../lib/live-state';
 import { undoneIds, undoTarget } from '../lib/undo-target';
 import { ActionGrid } from './action-grid';
+import { ArrestTimeDialog } from './arrest-time-dialog';
 import { CausesChecklist, tickedCauses } from './causes-checklist';
 import { CompressionsToggle } from './compressions-toggle';
 import { DetailsDialog } from './details-dialog';
@@ -49,11 +52,13 @@ export function LiveScreen({
   const laterEtco2 = useDeferredValue(etco2);
   const laterKept = useDeferredValue(kept);
   const ticked = useMemo(() => tickedCauses(events), [events]);
-  const [dialog, setDialog] = useState<DialogName | 'details' | 'team' | null>(null);
+  const [dialog, setDialog] = useState<DialogName | 'details' | 'team' | 'arrest' | null>(null);
   const [undid, setUndid] = useState<string | null>(null);
   const close = useCallback(() => setDialog(null), []);
   const openDetails = useCallback(() => setDialog('details'), []);
   const openTeam = useCallback(() => setDialog('team'), []);
+  const openArrest = useCallback(() => setDialog('arrest'), []);
+  const setArrest = useArrestTime(record.id, record.arrestAt, events);
   const { undo: undoEntry } = actions;
   const undo = useCallback(() => setUndid(undoEntry()), [undoEntry]);
   const childWeight = record.ageGroup !== 'adult' ? record.weightKg : undefined;
@@ -65,6 +70,7 @@ export function LiveScreen({
         recordId={record.id}
         onDetails={openDetails}
         onTeam={openTeam}
+        onArrestTime={openArrest}
       />
       <ClinicalCaution dense />
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', md: '3fr 2fr' }, gap: 2 }}>
@@ -118,7 +124,7 @@ export function LiveScreen({
         </Stack>
       </Box>
       <LiveDialogs
-        open={dialog === 'details' || dialog === 'team' ? null : dialog}
+        open={dialog === 'details' || dialog === 'team' || dialog === 'arrest' ? null : dialog}
         onClose={close}
         record={actions.record}
         onEtco2={actions.etco2}
@@ -129,6 +135,17 @@ export function LiveScreen({
         shocksGiven={state.shocks}
       />
       {dialog === 'details' && <DetailsDialog open record={record} onClose={close} />}
+      {dialog === 'arrest' && (
+        <ArrestTimeDialog
+          open
+          startAt={startArrest(events)?.at ?? record.arrestAt}
+          onSave={(minutes, reason) => {
+            void setArrest(minutes, reason);
+            close();
+          }}
+          onClose={close}
+        />
+      )}
       <RosterDialog
         open={dialog === 'team'}
         recordId={record.id}
