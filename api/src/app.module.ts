@@ -5,7 +5,6 @@ import { JwtAuthGuard, RolesGuard } from './common/auth.guards';
 import { ErrorFilter } from './common/error.filter';
 import { APP_CONFIG, type AppConfig } from './config';
 import { DatabaseModule } from './db/database.module';
-import { AdminMailModule } from './modules/admin-mail/admin-mail.module';
 import { AuditModule } from './modules/audit/audit.module';
 import { AuditLogModule } from './modules/audit-log/audit-log.module';
 import { AuthModule } from './modules/auth/auth.module';
@@ -28,14 +27,13 @@ import { UsersModule } from './modules/users/users.module';
 @Module({})
 export class AppModule {
   static register(config: AppConfig): DynamicModule {
-    const quiet = process.env.NODE_ENV === 'test' || process.env.LOG_LEVEL === 'silent';
     return {
       module: AppModule,
       global: true,
       imports: [
         LoggerModule.forRoot({
           pinoHttp: {
-            level: quiet ? 'silent' : (process.env.LOG_LEVEL ?? 'info'),
+            level: config.logLevel,
             // Tokens and passwords never reach the log.
             redact: ['req.headers.authorization', 'req.body.password'],
             autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
@@ -65,7 +63,6 @@ export class AppModule {
         SitesModule,
         ProfilesModule,
         AuditLogModule,
-        AdminMailModule,
       ],
       providers: [
         { provide: APP_CONFIG, useValue: config },

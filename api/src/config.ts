@@ -11,12 +11,21 @@ export interface AppConfig {
   publicUrl: string;
   smtp: { host: string; port: number; from: string };
   smtpSinkPort: number | null;
+  /** Largest number of PostgreSQL connections this process opens. */
+  dbPoolMax: number;
+  /** pino level for request logs; `silent` under tests. */
+  logLevel: string;
+  /** IANA time zone of the clock times in PDF reports (the server's own when unset). */
+  reportTimeZone: string | undefined;
+  /** How often the outbox worker retries queued mail; 0 = never (tests call it directly). */
+  mailRetryIntervalMs: number;
 }
 
 export const APP_CONFIG = Symbol('APP_CONFIG');
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const port = Number(env.PORT ?? 8080);
+  const test = env.NODE_ENV === 'test';
   return {
     port,
     databaseUrl: env.DATABASE_URL ?? 'postgres://postgres@127.0.0.1:54329/upstroke',
@@ -32,5 +41,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
       from: env.MAIL_FROM ?? 'Upstroke <no-reply@kestrel.test>',
     },
     smtpSinkPort: env.SMTP_SINK_PORT ? Number(env.SMTP_SINK_PORT) : null,
+    dbPoolMax: Number(env.DB_POOL_MAX ?? 10),
+    logLevel: test ? 'silent' : (env.LOG_LEVEL ?? 'info'),
+    reportTimeZone: env.REPORT_TIME_ZONE || undefined,
+    mailRetryIntervalMs: test ? 0 : Number(env.MAIL_RETRY_INTERVAL_MS ?? 30_000),
   };
 }

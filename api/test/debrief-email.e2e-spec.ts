@@ -1,5 +1,5 @@
 import { SMTPServer } from 'smtp-server';
-import { OutboxRetryWorker } from '../src/modules/debrief-mail/outbox-retry.worker';
+import { OutboxRetryWorker } from '../src/modules/mail/outbox-retry.worker';
 import { signedRecord } from './debrief-fixtures';
 import { freePort } from './free-port';
 import { startTestApp, type TestApp } from './test-app';

@@ -8,7 +8,7 @@ import { createKnex, KNEX, type Db } from './knex';
     {
       provide: KNEX,
       inject: [APP_CONFIG],
-      useFactory: (config: AppConfig) => createKnex(config.databaseUrl),
+      useFactory: (config: AppConfig) => createKnex(config.databaseUrl, config.dbPoolMax),
     },
   ],
   exports: [KNEX],

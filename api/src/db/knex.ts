@@ -23,11 +23,11 @@ function camelRow(row: unknown): unknown {
  * Knex with camelCase in TypeScript and snake_case in PostgreSQL: identifiers are converted
  * on the way in, top-level row keys on the way out (JSON column contents are left alone).
  */
-export function createKnex(databaseUrl: string): Knex {
+export function createKnex(databaseUrl: string, poolMax = 10): Knex {
   return knex({
     client: 'pg',
     connection: databaseUrl,
-    pool: { min: 0, max: Number(process.env.DB_POOL_MAX ?? 10) },
+    pool: { min: 0, max: poolMax },
     wrapIdentifier: (value, origImpl) => origImpl(value === '*' ? value : toSnake(value)),
     postProcessResponse: (result: unknown) =>
       Array.isArray(result) ? result.map(camelRow) : camelRow(result),

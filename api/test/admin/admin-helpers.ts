@@ -1,6 +1,6 @@
 import type { SMTPServer } from 'smtp-server';
 import { startMailSink } from '../../src/modules/mail/mail-sink';
-import { plainTextOf } from '../../src/modules/admin-mail/mime-text';
+import { plainTextOf } from '../../src/modules/mail/mime-text';
 import type { LoginResponse } from '@upstroke/contracts';
 import { freePort } from '../free-port';
 import { demoPassword, startTestApp, type TestApp } from '../test-app';

@@ -36,7 +36,7 @@ export class ExportsService {
     return renderReportPdf(d, {
       version: appVersion(),
       generatedAt: new Date(),
-      timeZone: process.env.REPORT_TIME_ZONE,
+      timeZone: this.config.reportTimeZone,
     });
   }
 

@@ -1,9 +1,10 @@
 import { Inject, Injectable, type OnModuleDestroy } from '@nestjs/common';
-import nodemailer, { type Transporter } from 'nodemailer';
+import type { Transporter } from 'nodemailer';
 import { DomainError } from '../../common/errors';
 import { APP_CONFIG, type AppConfig } from '../../config';
 import type { Db } from '../../db/knex';
-import { MailOutboxRepository } from './mail-outbox.repository';
+import { OutboxRepository } from './outbox.repository';
+import { createSmtpTransport } from './smtp-transport';
 
 export interface MailMessage {
   to: string | string[];
@@ -33,18 +34,9 @@ export class MailService implements OnModuleDestroy {
 
   constructor(
     @Inject(APP_CONFIG) private readonly config: AppConfig,
-    private readonly outbox: MailOutboxRepository,
+    private readonly outbox: OutboxRepository,
   ) {
-    this.transport = nodemailer.createTransport({
-      host: config.smtp.host,
-      port: config.smtp.port,
-      secure: false,
-      // The loopback sink offers no TLS; a hosted relay is configured with its own settings.
-      ignoreTLS: config.smtp.host === '127.0.0.1' || config.smtp.host === 'localhost',
-      connectionTimeout: 10_000,
-      greetingTimeout: 10_000,
-      socketTimeout: 20_000,
-    });
+    this.transport = createSmtpTransport(config.smtp);
   }
 
   /**
@@ -74,7 +66,7 @@ export class MailService implements OnModuleDestroy {
       await this.transport.sendMail({ from: this.config.smtp.from, ...mail, to });
     } catch (error) {
       if (trx) throw unreachable();
-      await this.outbox.markAttemptFailed(id, String(error), new Date(Date.now() + 60_000));
+      await this.outbox.markFailed(id, String(error), new Date(Date.now() + 60_000));
       return 'queued';
     }
     await this.outbox.markSent(id, trx);

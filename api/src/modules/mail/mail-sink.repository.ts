@@ -20,7 +20,7 @@ const listColumns = ['id', 'receivedAt', 'mailFrom', 'rcptTo', 'subject', 'sizeB
 
 /** Reads the local sink's messages and, where it exists, the delivery queue's state. */
 @Injectable()
-export class AdminMailRepository {
+export class MailSinkRepository {
   constructor(@Inject(KNEX) private readonly db: Db) {}
 
   /** Messages a scoped admin may read: only those to users they manage. */

@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { Inject, Injectable } from '@nestjs/common';
 import { KNEX, type Db } from '../../db/knex';
 import { type AdminScope, scopeOutbox } from '../admin-scope/admin-scope.repository';
@@ -20,6 +21,19 @@ export interface OutboxRow {
   resuscitationId: string | null;
 }
 
+export interface OutboxInsert {
+  to: string[];
+  subject: string;
+  body: string;
+  attachmentName?: string | null;
+  attachmentType?: string | null;
+  attachment?: Buffer | null;
+  resuscitationId?: string | null;
+  createdBy?: string | null;
+  /** Until then the retry worker leaves the row alone: the first attempt is being made. */
+  nextAttemptAt: Date;
+}
+
 const listColumns = [
   'id',
   'to',
@@ -35,10 +49,19 @@ const listColumns = [
   'attachmentName',
 ];
 
-/** `mail_outbox` for the retry worker and the admins' list; no rules here. */
+/**
+ * `mail_outbox`, the one queue: every message is written before it is sent, so none is
+ * lost; the retry worker claims due rows, the admins list them. No rules here.
+ */
 @Injectable()
 export class OutboxRepository {
   constructor(@Inject(KNEX) private readonly db: Db) {}
+
+  async insert(row: OutboxInsert, trx?: Db): Promise<string> {
+    const id = randomUUID();
+    await (trx ?? this.db)('mailOutbox').insert({ id, ...row, status: 'queued' });
+    return id;
+  }
 
   /** The queue as `scope` may see it (see `scopeOutbox`). */
   async list(scope: AdminScope, limit: number, offset: number) {
@@ -81,8 +104,8 @@ export class OutboxRepository {
     });
   }
 
-  async markSent(id: string): Promise<void> {
-    await this.db('mailOutbox')
+  async markSent(id: string, trx?: Db): Promise<void> {
+    await (trx ?? this.db)('mailOutbox')
       .where({ id })
       .update({
         status: 'sent',

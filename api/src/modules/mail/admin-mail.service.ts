@@ -3,7 +3,8 @@ import type { MailOverview, MailSinkMessage, MailSinkMessageDetail } from '@upst
 import type { AuthUser } from '../../common/auth.decorators';
 import { notFound } from '../../common/errors';
 import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
-import { AdminMailRepository, type SinkRow } from './admin-mail.repository';
+import { MailSinkRepository, type SinkRow } from './mail-sink.repository';
+import { OutboxRepository } from './outbox.repository';
 import { plainTextOf } from './mime-text';
 
 function toMessage(row: SinkRow): MailSinkMessage {
@@ -20,9 +21,28 @@ function toMessage(row: SinkRow): MailSinkMessage {
 @Injectable()
 export class AdminMailService {
   constructor(
-    private readonly mail: AdminMailRepository,
+    private readonly mail: MailSinkRepository,
     private readonly scope: AdminScopeRepository,
+    private readonly outboxRows: OutboxRepository,
   ) {}
+
+  /** The delivery queue as this admin may see it, newest first, without bodies. */
+  async outbox(admin: AuthUser, limit: number, offset: number) {
+    const { items, total } = await this.outboxRows.list(
+      await this.scope.scopeOf(admin),
+      limit,
+      offset,
+    );
+    return {
+      items: items.map((r) => ({
+        ...r,
+        nextAttemptAt: r.nextAttemptAt.toISOString(),
+        sentAt: r.sentAt ? r.sentAt.toISOString() : null,
+        createdAt: r.createdAt.toISOString(),
+      })),
+      total,
+    };
+  }
 
   async overview(admin: AuthUser, limit: number, offset: number): Promise<MailOverview> {
     const scope = await this.scope.scopeOf(admin);

@@ -5,9 +5,10 @@ import {
   type OnModuleDestroy,
   type OnModuleInit,
 } from '@nestjs/common';
-import nodemailer, { type Transporter } from 'nodemailer';
+import type { Transporter } from 'nodemailer';
 import { APP_CONFIG, type AppConfig } from '../../config';
 import { type OutboxRow, OutboxRepository } from './outbox.repository';
+import { createSmtpTransport } from './smtp-transport';
 
 /** Attempts before a message is marked failed (it stays in the table for admins). */
 export const MAX_ATTEMPTS = 8;
@@ -19,8 +20,9 @@ export function retryDelayMs(attempts: number): number {
 
 /**
  * Re-sends queued mail whose first attempt failed, with back-off. Runs on an interval in
- * the API (every `MAIL_RETRY_INTERVAL_MS`, 30 s by default); off in tests unless asked,
- * where `runOnce()` is called directly.
+ * the API (every `MAIL_RETRY_INTERVAL_MS`, 30 s by default); off in tests, where
+ * `runOnce()` is called directly. Rows are claimed with `for update skip locked`, so two
+ * API processes never send the same message.
  */
 @Injectable()
 export class OutboxRetryWorker implements OnModuleInit, OnModuleDestroy {
@@ -33,30 +35,18 @@ export class OutboxRetryWorker implements OnModuleInit, OnModuleDestroy {
     private readonly outbox: OutboxRepository,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {
-    this.transport = this.makeTransport(config.smtp.host, config.smtp.port);
-  }
-
-  private makeTransport(host: string, port: number): Transporter {
-    return nodemailer.createTransport({
-      host,
-      port,
-      secure: false,
-      ignoreTLS: host === '127.0.0.1' || host === 'localhost',
-      connectionTimeout: 10_000,
-      greetingTimeout: 10_000,
-      socketTimeout: 20_000,
-    });
+    this.transport = createSmtpTransport(config.smtp);
   }
 
   /** Tests point the worker at another SMTP server. */
   useSmtp(host: string, port: number): void {
     this.transport.close();
-    this.transport = this.makeTransport(host, port);
+    this.transport = createSmtpTransport({ host, port });
   }
 
   onModuleInit(): void {
-    const interval = Number(process.env.MAIL_RETRY_INTERVAL_MS ?? 30_000);
-    if (process.env.NODE_ENV === 'test' || !(interval > 0)) return;
+    const interval = this.config.mailRetryIntervalMs;
+    if (!(interval > 0)) return;
     this.timer = setInterval(() => void this.runOnce(), interval);
     this.timer.unref();
   }

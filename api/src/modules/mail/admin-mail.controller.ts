@@ -1,14 +1,9 @@
 import { Controller, Get, Param, ParseIntPipe, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { z } from 'zod';
 import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
 import { ZodPipe } from '../../common/zod.pipe';
 import { AdminMailService } from './admin-mail.service';
-
-const pageSchema = z.object({
-  limit: z.coerce.number().int().min(1).max(200).default(50),
-  offset: z.coerce.number().int().min(0).default(0),
-});
+import { type Page, pageSchema } from './page';
 
 /** The mail viewer: what the local sink received, and the delivery queue's state. */
 @ApiTags('admin')
@@ -19,10 +14,7 @@ export class AdminMailController {
   constructor(private readonly service: AdminMailService) {}
 
   @Get()
-  list(
-    @CurrentUser() admin: AuthUser,
-    @Query(new ZodPipe(pageSchema)) page: z.infer<typeof pageSchema>,
-  ) {
+  list(@CurrentUser() admin: AuthUser, @Query(new ZodPipe(pageSchema)) page: Page) {
     return this.service.overview(admin, page.limit, page.offset);
   }
 
