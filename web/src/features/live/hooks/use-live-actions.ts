@@ -31,7 +31,11 @@ export function useLiveActions(
   );
   const undo = useCallback((): string | null => {
     if (!target) return null;
-    record('correction', { supersedes: target.id, reason: 'Undo on the Live screen' });
+    // The reason names the entry, so the debrief and the PDF say what was taken back.
+    record('correction', {
+      supersedes: target.id,
+      reason: `Undo on the Live screen: ${target.label}`,
+    });
     return target.label;
   }, [record, target]);
   const rosc = useCallback(() => record('rosc', {}), [record]);
