@@ -1,4 +1,5 @@
 import type { AuditEntry } from '@upstroke/contracts';
+import { csvLines } from '../../common/csv';
 
 const columns: (keyof AuditEntry)[] = [
   'at',
@@ -12,23 +13,7 @@ const columns: (keyof AuditEntry)[] = [
   'details',
 ];
 
-/**
- * One CSV cell (RFC 4180 quoting). Cells that a spreadsheet would run as a formula get a
- * leading apostrophe: device ids and details come from clients.
- */
-export function csvCell(value: unknown): string {
-  let text =
-    value === null || value === undefined
-      ? ''
-      : typeof value === 'object'
-        ? JSON.stringify(value)
-        : String(value);
-  if (/^[=+\-@\t\r]/.test(text)) text = `'${text}`;
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
+/** The audit log as CSV, by the one CSV writer (formula cells neutralised). */
 export function auditCsv(entries: AuditEntry[]): string {
-  const header = columns.join(',');
-  const lines = entries.map((e) => columns.map((c) => csvCell(e[c])).join(','));
-  return [header, ...lines].join('\r\n') + '\r\n';
+  return csvLines([columns, ...entries.map((e) => columns.map((c) => e[c]))]);
 }

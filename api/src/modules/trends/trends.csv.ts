@@ -1,13 +1,5 @@
 import { findingKindSchema, type UtsteinSummary } from '@upstroke/contracts';
-
-/** RFC 4180 field: quoted when it holds a comma, a quote or a line break. */
-export function csvField(value: unknown): string {
-  if (value === null || value === undefined) return '';
-  const text = value instanceof Date ? value.toISOString() : String(value);
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
-
-export const csvLine = (fields: unknown[]) => `${fields.map(csvField).join(',')}\r\n`;
+import { csvLine } from '../../common/csv';
 
 /** Columns of the records export: [header, how to read it from a records-table row]. */
 const baseColumns: [string, (r: Record<string, unknown>) => unknown][] = [
