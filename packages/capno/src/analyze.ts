@@ -11,13 +11,15 @@ import { thresholdsForAgeGroup } from './age-rules.js';
 import { detectBreaths } from './breaths/breath-detector.js';
 import { etco2Measures, stepSegments } from './etco2/segments.js';
 import { etco2Series } from './etco2/series.js';
+import { mergeClose } from './events/intervals.js';
 import { eventMeasures } from './events/measures.js';
 import { normalizeEvents, type TimedEvent } from './events/normalize.js';
 import { buildTimeline } from './events/timeline.js';
 import { allFindings } from './findings/index.js';
 import { resolveThresholds } from './profile.js';
-import { median, secondsFrom } from './time.js';
+import { median } from './time.js';
 import { mmHgFactor } from './units.js';
+import { monitoringOf, runSpan, waveformRuns } from './waveform/runs.js';
 
 /** What the analysis needs once samples have become breaths (shared by batch and live). */
 export interface CoreInput {
@@ -59,13 +61,19 @@ function tailFrom<T extends { tSec: number }>(xs: readonly T[], from: number): r
 
 /**
  * Typical ventilation rate (breaths/min): the median of 60 ÷ the interval between
- * consecutive breaths, leaving out intervals long enough to count as an absent waveform.
+ * consecutive breaths, leaving out intervals long enough to count as an absent waveform and
+ * intervals across a data gap (no signal there, so breaths may have been missed).
  */
-export function ventilationRate(breaths: readonly Breath[], maxGapSec: number): number | null {
+export function ventilationRate(
+  breaths: readonly Breath[],
+  maxGapSec: number,
+  dataGaps: readonly Interval[] = [],
+): number | null {
   const rates: number[] = [];
   for (let i = 1; i < breaths.length; i++) {
-    const dt = breaths[i].tSec - breaths[i - 1].tSec;
-    if (dt > 0 && dt < maxGapSec) rates.push(60 / dt);
+    const [a, b] = [breaths[i - 1].tSec, breaths[i].tSec];
+    const acrossGap = dataGaps.some((g) => g.startSec < b && g.endSec > a);
+    if (b - a > 0 && b - a < maxGapSec && !acrossGap) rates.push(60 / (b - a));
   }
   return median(rates);
 }
@@ -77,11 +85,12 @@ export function analyzeCore(core: CoreInput): AnalysisOutput {
   const from = c.activeFrom ?? -Infinity;
   const tl = buildTimeline(c.events, end);
   const measures = eventMeasures(c.events, tl, from);
+  const monitoring = monitoringOf(c.waveformCoverage, end);
   // Values after the end of the record (e.g. monitor still running) are not part of it.
   const points = c.points.filter((p) => p.tSec <= end);
   const breaths = c.breaths.filter((b) => b.tSec <= end);
   const full = from === -Infinity;
-  const segments = full ? stepSegments(points, end) : [];
+  const segments = full ? stepSegments(points, end, monitoring.dataGaps) : [];
   const cut = from - lookbackSec(c.thresholds);
   const recentBreaths = tailFrom(breaths, cut);
   // In a live refresh, waveform absence is judged from the first breath kept onwards.
@@ -93,9 +102,10 @@ export function analyzeCore(core: CoreInput): AnalysisOutput {
     pauses: measures.pauses,
     points: tailFrom(points, cut),
     allPoints: points,
-    segments: full ? segments : stepSegments(tailFrom(points, cut), end),
+    segments: full ? segments : stepSegments(tailFrom(points, cut), end, monitoring.dataGaps),
+    dataGaps: monitoring.dataGaps,
     breaths: recentBreaths,
-    waveformCoverage: c.waveformCoverage
+    waveformCoverage: mergeClose(c.waveformCoverage)
       .filter((w) => w.endSec > watchFrom)
       .map((w) => ({ startSec: Math.max(w.startSec, watchFrom), endSec: w.endSec })),
     live: c.live ?? false,
@@ -105,7 +115,10 @@ export function analyzeCore(core: CoreInput): AnalysisOutput {
   return {
     measures: {
       ...measures,
-      ventilationRatePerMin: full ? ventilationRate(breaths, c.thresholds.waveformAbsentSec) : null,
+      ...monitoring,
+      ventilationRatePerMin: full
+        ? ventilationRate(breaths, c.thresholds.waveformAbsentSec, monitoring.dataGaps)
+        : null,
       etco2: full
         ? etco2Measures(points, segments, tl.compressions)
         : { medianMmHg: null, fractionAtOrAbove10: null, fractionAtOrAbove20: null },
@@ -138,12 +151,17 @@ export function analyze(input: AnalysisInput): AnalysisOutput {
   const events = normalizeEvents(input.arrestAt, input.events);
   let breaths: Breath[] = [];
   const coverage: Interval[] = [];
-  const w = input.waveform;
-  if (w && w.values.length > 0) {
-    const t0 = secondsFrom(input.arrestAt, w.startAt);
-    breaths = detectBreaths(w.values, w.sampleRateHz, t0, {}, mmHgFactor(w.unit, w.barometricMmHg));
-    coverage.push({ startSec: t0, endSec: t0 + w.values.length / w.sampleRateHz });
+  // Each run is read on its own: a breath is never pieced together across a gap.
+  for (const w of waveformRuns(input.waveform)) {
+    const span = runSpan(input.arrestAt, w);
+    const scale = mmHgFactor(w.unit, w.barometricMmHg);
+    const found = detectBreaths(w.values, w.sampleRateHz, span.startSec, {}, scale);
+    for (const b of found) breaths.push(b);
+    coverage.push(span);
   }
+  // Runs given out of order or overlapping (a hand-made file): breaths in time order.
+  if (breaths.some((b, i) => i > 0 && b.tSec < breaths[i - 1].tSec))
+    breaths = [...breaths].sort((a, b) => a.tSec - b.tSec);
   const points = etco2Series(input.arrestAt, input.etco2, breaths);
   return analyzeCore({
     thresholds: resolveThresholds(input.profile),

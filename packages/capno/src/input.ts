@@ -72,6 +72,21 @@ function checkSemantics(input: AnalysisInput): string | null {
   return null;
 }
 
+type Issue = NonNullable<
+  ReturnType<typeof analysisInputSchema.safeParse>['error']
+>['issues'][number];
+
+/**
+ * For a field that may take one of two shapes (the waveform: one run or a list of runs),
+ * the issue of the shape the input has, so the message names the field at fault.
+ */
+function branchIssue(issue: Issue, raw: unknown): Issue {
+  if (issue.code !== 'invalid_union' || issue.errors.length !== 2) return issue;
+  const branch = Array.isArray(valueAt(raw, issue.path)) ? 1 : 0;
+  const inner = issue.errors[branch][0];
+  return inner ? { ...inner, path: [...issue.path, ...inner.path] } : issue;
+}
+
 /**
  * Parses and validates the text of an analysis input file. The message of a failure is
  * one line that starts with the field path (e.g. `events[3].at: …`).
@@ -85,7 +100,7 @@ export function parseAnalysisInput(text: string): InputResult {
   }
   const parsed = analysisInputSchema.safeParse(raw);
   if (!parsed.success) {
-    const issue = parsed.error.issues[0];
+    const issue = branchIssue(parsed.error.issues[0], raw);
     const notNumber = valueAt(raw, issue.path) === NOT_A_NUMBER;
     const msg = notNumber ? 'not a finite number (NaN or Infinity)' : issue.message;
     return { ok: false, message: `${formatPath(issue.path)}: ${msg}`.replace(/\s*\n\s*/g, ' ') };

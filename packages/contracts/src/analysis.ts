@@ -31,7 +31,11 @@ export const analysisInputSchema = z.object({
   profile: profileInputSchema.optional(),
   events: z.array(analysisEventSchema),
   etco2: z.array(analysisEtco2Schema).optional(),
-  waveform: waveformSchema.optional(),
+  /**
+   * One capnogram, or (ours) a list of runs of one in time order with no data between them —
+   * a link drop or a monitor switched off is a gap, never zero CO2.
+   */
+  waveform: z.union([waveformSchema, z.array(waveformSchema)]).optional(),
   /** Default adult; child and infant records are analysed with the profile's paediatric rules. */
   ageGroup: ageGroupSchema.optional(),
   weightKg: z.number().positive().max(400).optional(),
@@ -137,6 +141,15 @@ export const measuresSchema = z.object({
    * when the record ends in ROSC before 20 min have passed (the record cannot tell).
    */
   sustainedRosc: z.boolean().nullable().optional(),
+  /**
+   * Where the capnogram has no data once monitoring began (a link drop, a gap between
+   * files, or no signal after the last sample to the end): data gaps, never findings.
+   */
+  dataGaps: z.array(intervalSchema).optional(),
+  /** Time from the first capnogram sample to the end of the record (s); null without one. */
+  monitoredSec: z.number().nullable().optional(),
+  /** Share of `monitoredSec` with capnogram data (0–1); null without a capnogram. */
+  monitoringCoverage: z.number().nullable().optional(),
 });
 export type Measures = z.infer<typeof measuresSchema>;
 

@@ -11,12 +11,13 @@ import { z } from 'zod';
  * - `ticks`: round minutes across the span, at most about a dozen;
  * - `markers`: one per event in force inside the span, with its short code ('' when the
  *   event has none: the screen may draw its own symbol);
- * - `shaded`: intervals drawn as bands behind the data, by kind;
+ * - `shaded`: intervals drawn as bands behind the data, by kind (`rosc`: the patient's ROSC
+ *   periods, from the engine's patient state);
  * - `gaps`: stretches of the span where a capnogram was being recorded but no signal was
- *   stored (a data gap, never a clinical finding);
+ *   stored (the analysis' `dataGaps`: a data gap, never a clinical finding);
  * - `rises`: EtCO2 rises, with the confounder that came just before when there was one.
  */
-export const timelineShadeKindSchema = z.enum(['compressions', 'etco2-low']);
+export const timelineShadeKindSchema = z.enum(['compressions', 'etco2-low', 'rosc']);
 export type TimelineShadeKind = z.infer<typeof timelineShadeKindSchema>;
 
 export const timelineMarkerSchema = z.object({

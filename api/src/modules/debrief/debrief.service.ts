@@ -22,15 +22,15 @@ export class DebriefService {
     return (await this.build(await this.access.readable(user, id))).debrief;
   }
 
-  /** The debrief and the assembled capnogram (the FHIR export carries it whole). */
+  /** The debrief and the capnogram's runs (the FHIR export carries them whole). */
   async withWaveform(
     user: AuthUser,
     id: string,
-  ): Promise<{ debrief: Debrief; waveform?: Waveform }> {
+  ): Promise<{ debrief: Debrief; waveform: Waveform[] }> {
     return this.build(await this.access.readable(user, id));
   }
 
-  async build(record: ResuscitationRow): Promise<{ debrief: Debrief; waveform?: Waveform }> {
+  async build(record: ResuscitationRow): Promise<{ debrief: Debrief; waveform: Waveform[] }> {
     const [stored, context, amendments] = await Promise.all([
       this.data.loadStored(record.id),
       this.repo.context(record),

@@ -185,7 +185,22 @@ describe('timeline model', () => {
     });
     const s = stored({ waveform: [chunk(100), chunk(110), chunk(200)] });
     const { debrief } = composeDebrief(s, { record: header, computedBy: 'server' });
-    expect(debrief.timeline.gaps).toEqual([{ startSec: 120, endSec: 200 }]);
+    // No samples between 120 and 200 s, nor from the last one (210 s) to the end (620 s).
+    expect(debrief.timeline.gaps).toEqual([
+      { startSec: 120, endSec: 200 },
+      { startSec: 210, endSec: 620 },
+    ]);
+    expect(debrief.measures.dataGaps).toEqual(debrief.timeline.gaps);
+    expect(debrief.measures.monitoringCoverage).toBeCloseTo(30 / 520, 10);
+  });
+
+  it('shades the ROSC periods of the patient state', () => {
+    const s = stored();
+    s.events = [...s.events, ev('r', 300, 'rosc'), ev('ra', 400, 'rearrest')];
+    const { debrief } = composeDebrief(s, { record: header, computedBy: 'server' });
+    expect(debrief.timeline.shaded.filter((x) => x.kind === 'rosc')).toEqual([
+      { kind: 'rosc', startSec: 300, endSec: 400 },
+    ]);
   });
 
   it('leaves a typed EtCO2 value taken back by a correction out of the analysis, keeping the correction listed', () => {

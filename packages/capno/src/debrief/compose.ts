@@ -15,7 +15,8 @@ import { analyze } from '../analyze.js';
 import { etco2Series, valuesBesideWaveform } from '../etco2/series.js';
 import { eventsInForce, supersededByMap, supersededIds } from '../events/normalize.js';
 import { profileInForce } from './profile-in-force.js';
-import { joinWaveform, type StoredRecord, waveformGaps, waveformSource } from './stored-record.js';
+import { runSpan } from '../waveform/runs.js';
+import { joinWaveform, type StoredRecord, waveformSource } from './stored-record.js';
 import { buildTimelineModel } from './timeline-model.js';
 import { waveformTrace } from './waveform-trace.js';
 
@@ -31,7 +32,8 @@ export interface StoredAnalysis {
   input: AnalysisInput;
   output: AnalysisOutput;
   profile: DebriefProfile;
-  waveform?: Waveform;
+  /** The capnogram's runs (`joinWaveform`), empty without one. */
+  waveform: Waveform[];
 }
 
 const isObject = (x: unknown): x is Record<string, unknown> =>
@@ -58,14 +60,14 @@ export function analyseStored(stored: StoredRecord): StoredAnalysis {
     const r = analysisEtco2Schema.safeParse(v);
     if (r.success) etco2.push(r.data);
   }
-  const waveform = stored.waveform?.length ? joinWaveform(stored.waveform) : undefined;
+  const waveform = joinWaveform(stored.waveform ?? []);
   const input: AnalysisInput = {
     arrestAt: stored.arrestAt,
     profile: profile.thresholds,
     events,
     // Per-breath values read off the same capnogram are not counted twice (capno's rule).
     etco2: valuesBesideWaveform(etco2, waveform),
-    waveform,
+    waveform: waveform.length ? waveform : undefined,
     // Child and infant records are analysed with the profile's paediatric rules.
     ageGroup: stored.ageGroup ?? undefined,
     weightKg: stored.weightKg && stored.weightKg <= 400 ? stored.weightKg : undefined,
@@ -112,21 +114,10 @@ export function debriefEventsInForce(d: Pick<Debrief, 'events' | 'record'>): Deb
 export function composeDebrief(
   stored: StoredRecord,
   header: DebriefHeader,
-): { debrief: Debrief; waveform?: Waveform } {
+): { debrief: Debrief; waveform: Waveform[] } {
   const { input, output, profile, waveform } = analyseStored(stored);
   const events = debriefEvents(stored);
   const series = etco2Series(stored.arrestAt, input.etco2 ?? [], output.breaths);
-  const t0 = Date.parse(stored.arrestAt);
-  const coverage = waveform
-    ? [
-        {
-          startSec: (Date.parse(waveform.startAt) - t0) / 1000,
-          endSec:
-            (Date.parse(waveform.startAt) - t0) / 1000 +
-            waveform.values.length / waveform.sampleRateHz,
-        },
-      ]
-    : [];
   const record = { ...header.record };
   const inForce = debriefEventsInForce({ events, record });
   const debrief: Debrief = {
@@ -141,8 +132,7 @@ export function composeDebrief(
       inForce,
       output,
       etco2Series: series,
-      waveformCoverage: coverage,
-      gaps: stored.waveform ? waveformGaps(stored.arrestAt, stored.waveform) : [],
+      waveformCoverage: waveform.map((w) => runSpan(stored.arrestAt, w)),
     }),
     computedBy: header.computedBy,
   };

@@ -14,7 +14,6 @@ export {
   type StoredProfile,
   type StoredRecord,
   type StoredWaveformChunk,
-  waveformGaps,
   waveformSource,
 } from './stored-record.js';
 export { buildSummaryRow } from './summary-row.js';

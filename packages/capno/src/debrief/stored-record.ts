@@ -1,5 +1,4 @@
 import type { AgeGroup, Co2Unit, RecordSummaryRow, Rhythm, Waveform } from '@upstroke/contracts';
-import type { Interval } from '@upstroke/contracts';
 
 /** One stored event: what the record holds, before validation and corrections. */
 export interface StoredEvent {
@@ -81,39 +80,31 @@ export function waveformSource(chunks: readonly StoredWaveformChunk[]): string {
 }
 
 /**
- * Joins stored waveform chunks into the one capnogram the analysis reads — the single rule
- * for every output, so all see the same signal. A gap between chunks is filled with zero CO2
- * (no signal reached the server: the analysis may report an absent waveform there), and a
- * sample that overlaps one already placed is dropped.
+ * Joins stored waveform chunks into the capnogram the analysis reads — the single rule for
+ * every output, so all see the same signal: chunks that follow on within half a sample form
+ * one run; a later chunk starts a new run, leaving a gap (no signal reached the server: no
+ * data, never zero CO2, and never samples allocated for it); a sample that overlaps one
+ * already placed is dropped.
  */
-export function joinWaveform(chunks: readonly StoredWaveformChunk[]): Waveform | undefined {
-  const use = chunksInUse(chunks);
-  if (use.length === 0) return undefined;
-  const first = use[0];
-  const rate = first.sampleRateHz;
-  const t0 = Date.parse(first.startAt);
-  const values: number[] = [];
-  for (const c of use) {
-    const offset = Math.round(((Date.parse(c.startAt) - t0) / 1000) * rate);
-    while (values.length < offset) values.push(0);
-    for (let i = values.length - offset; i < c.values.length; i++) values.push(c.values[i]);
-  }
-  return { startAt: first.startAt, sampleRateHz: rate, unit: first.unit, values };
-}
-
-/**
- * Stretches between the chunks in use where no signal was stored (seconds from the arrest),
- * longer than one second: data gaps of the capnogram.
- */
-export function waveformGaps(arrestAt: string, chunks: readonly StoredWaveformChunk[]): Interval[] {
-  const t0 = Date.parse(arrestAt);
-  const gaps: Interval[] = [];
-  let reached: number | null = null;
+export function joinWaveform(chunks: readonly StoredWaveformChunk[]): Waveform[] {
+  const runs: { w: Waveform; values: number[]; t0: number }[] = [];
   for (const c of chunksInUse(chunks)) {
-    const start = (Date.parse(c.startAt) - t0) / 1000;
-    if (reached !== null && start - reached > 1) gaps.push({ startSec: reached, endSec: start });
-    const end = start + c.values.length / c.sampleRateHz;
-    reached = reached === null ? end : Math.max(reached, end);
+    const period = 1000 / c.sampleRateHz;
+    const start = Date.parse(c.startAt);
+    const last = runs[runs.length - 1];
+    const endMs = last ? last.t0 + last.values.length * period : -Infinity;
+    if (!last || start > endMs + period / 2) {
+      const values: number[] = [];
+      runs.push({
+        w: { startAt: c.startAt, sampleRateHz: c.sampleRateHz, unit: c.unit, values },
+        values,
+        t0: start,
+      });
+    }
+    const run = runs[runs.length - 1];
+    const offset = Math.round((start - run.t0) / period);
+    for (let i = Math.max(0, run.values.length - offset); i < c.values.length; i++)
+      run.values.push(c.values[i]);
   }
-  return gaps;
+  return runs.map((r) => r.w).filter((w) => w.values.length > 0);
 }

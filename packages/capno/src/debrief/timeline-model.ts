@@ -22,9 +22,8 @@ export interface TimelineParts {
   inForce: readonly DebriefEvent[];
   output: AnalysisOutput;
   etco2Series: readonly Etco2Point[];
-  /** Where a capnogram was stored (seconds from arrest), and its gaps. */
+  /** Where a capnogram was stored (seconds from arrest); its gaps are the analysis' `dataGaps`. */
   waveformCoverage: readonly Interval[];
-  gaps: readonly Interval[];
 }
 
 /**
@@ -32,7 +31,7 @@ export interface TimelineParts {
  * or capnogram sample. Events added by an amendment do not count (an amendment written days
  * later must not stretch the code), and the result lies in [MIN_SPAN_SEC, MAX_SPAN_SEC].
  */
-export function spanEndSec(p: Omit<TimelineParts, 'output' | 'gaps'>): number {
+export function spanEndSec(p: Omit<TimelineParts, 'output'>): number {
   const end = p.inForce.find((e) => e.kind === 'end');
   let last = 0;
   if (end) last = end.tSec;
@@ -91,8 +90,12 @@ export function buildTimelineModel(p: TimelineParts): TimelineModel {
         findings.filter((f) => f.kind === 'etco2-low'),
         end,
       ).map((x) => ({ kind: 'etco2-low' as const, ...x })),
+      ...clip(p.output.measures.roscPeriods ?? [], end).map((x) => ({
+        kind: 'rosc' as const,
+        ...x,
+      })),
     ],
-    gaps: clip(p.gaps, end),
+    gaps: clip(p.output.measures.dataGaps ?? [], end),
     rises: findings
       .filter((f) => f.kind === 'etco2-rise' && f.startSec <= end)
       .map((f) => ({ tSec: f.startSec, confounder: f.confounder })),

@@ -11,13 +11,27 @@ export interface Etco2Segment extends Interval {
   mmHg: number;
 }
 
-/** The series as a step function: each value holds until the next one (≤ MAX_HOLD_SEC). */
-export function stepSegments(points: readonly Etco2Point[], endSec: number): Etco2Segment[] {
+/** Values read off a capnogram: they stand for nothing once its signal stops (a data gap). */
+const fromSignal = new Set<Etco2Point['source']>(['waveform', 'stream']);
+
+/**
+ * The series as a step function: each value holds until the next one (≤ MAX_HOLD_SEC); a
+ * value read off the capnogram holds no further than the start of a data gap (`gaps`,
+ * sorted): no data is not a value.
+ */
+export function stepSegments(
+  points: readonly Etco2Point[],
+  endSec: number,
+  gaps: readonly Interval[] = [],
+): Etco2Segment[] {
   const out: Etco2Segment[] = [];
+  let g = 0;
   for (let i = 0; i < points.length; i++) {
     const s = points[i].tSec;
+    while (g < gaps.length && gaps[g].endSec <= s) g++;
     const next = i + 1 < points.length ? points[i + 1].tSec : endSec;
-    const e = Math.min(next, s + MAX_HOLD_SEC, Math.max(endSec, s));
+    const cut = fromSignal.has(points[i].source) && g < gaps.length ? gaps[g].startSec : Infinity;
+    const e = Math.min(next, s + MAX_HOLD_SEC, Math.max(endSec, s), Math.max(cut, s));
     if (e > s) out.push({ startSec: s, endSec: e, mmHg: points[i].mmHg });
   }
   return out;

@@ -19,19 +19,23 @@ const derivedSources = new Set<Etco2Source>(['stream', 'import', 'waveform']);
  * The stored values to analyse beside a waveform: when the capnogram itself is analysed,
  * the per-breath values that were read off it (monitor link, monitor file) inside the time
  * it covers would count every breath twice, so they are left out; typed values, and values
- * outside the capnogram's span (its breaths are not there), stay. Without a waveform all stay.
+ * outside the spans of its runs (its breaths are not there), stay. Without a waveform all stay.
  */
 export function valuesBesideWaveform(
   values: readonly AnalysisEtco2[],
-  waveform: Waveform | undefined,
+  waveform: Waveform | readonly Waveform[] | undefined,
 ): AnalysisEtco2[] {
-  if (!waveform || waveform.values.length === 0) return [...values];
-  const from = Date.parse(waveform.startAt);
-  const to = from + (waveform.values.length / waveform.sampleRateHz) * 1000;
+  const spans = (waveform === undefined ? [] : Array.isArray(waveform) ? waveform : [waveform])
+    .filter((w: Waveform) => w.values.length > 0)
+    .map((w: Waveform) => {
+      const from = Date.parse(w.startAt);
+      return { from, to: from + (w.values.length / w.sampleRateHz) * 1000 };
+    });
+  if (spans.length === 0) return [...values];
   return values.filter((v) => {
     if (!derivedSources.has(v.source)) return true;
     const t = Date.parse(v.at);
-    return t < from || t > to;
+    return !spans.some((x) => t >= x.from && t <= x.to);
   });
 }
 

@@ -23,7 +23,7 @@ export interface FindingContext {
   segments: readonly Etco2Segment[];
   breaths: readonly Breath[];
   /** Where the capnogram has no data between samples received (a link drop): no breath can be seen. */
-  dataGaps?: readonly Interval[];
+  dataGaps: readonly Interval[];
   /** Times covered by waveform samples (no waveform → empty: absence cannot be judged). */
   waveformCoverage: readonly Interval[];
   /** Live use: the record is still open at `tl.endSec`, so open states (a pause) are ongoing. */

@@ -49,7 +49,7 @@ export function ventilationFindings(c: FindingContext): Finding[] {
   const msg = (r: number) =>
     `Ventilation rate about ${fmt(r)}/min, above the ${fmt(c.t.ventilationMaxPerMin)}/min of the protocol. Fast ventilation suggests hyperventilation, which lowers EtCO2 and can impede venous return; consider slowing ventilation.`;
   const episodes: (Interval & { peak: number })[] = [];
-  const rates = rollingRates(c.breaths, c.t.waveformAbsentSec, c.dataGaps ?? []);
+  const rates = rollingRates(c.breaths, c.t.waveformAbsentSec, c.dataGaps);
   for (let i = 0; i < rates.length; i++) {
     if (!above(rates[i], limit)) continue;
     let j = i;

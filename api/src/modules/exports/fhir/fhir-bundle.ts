@@ -32,7 +32,8 @@ export function stableUuid(name: string): string {
 
 export interface FhirOptions {
   publicUrl: string;
-  waveform?: Waveform;
+  /** The capnogram's runs, in time order. */
+  waveform?: readonly Waveform[];
 }
 
 /**
@@ -88,15 +89,13 @@ export function toFhirBundle(d: Debrief, opts: FhirOptions): FhirBundle {
     if (e.kind === 'drug') add(`drug/${e.id}`, medicationOf(ctx, e));
   }
   for (const [key, obs] of etco2Observations(ctx)) add(key, obs);
-  if (opts.waveform)
+  // One Observation per run of the capnogram: a data gap between runs is not sent as values.
+  (opts.waveform ?? []).forEach((w, i) =>
     add(
-      'waveform',
-      waveformObservation(
-        ctx,
-        opts.waveform,
-        arrayToMmHg(opts.waveform.values, opts.waveform.unit),
-      ),
-    );
+      i === 0 ? 'waveform' : `waveform/${i}`,
+      waveformObservation(ctx, w, arrayToMmHg(w.values, w.unit, w.barometricMmHg)),
+    ),
+  );
   return {
     resourceType: 'Bundle',
     id: stableUuid(`${id}/bundle`),

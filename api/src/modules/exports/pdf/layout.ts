@@ -7,6 +7,7 @@ export const colors = {
   band: '#e3f1e6',
   low: '#f6d5d2',
   gap: '#e4e6ea',
+  rosc: '#dbe8f5',
   lowEdge: '#c0392b',
   rise: '#1f6fb2',
   etco2: '#0b5c8a',

@@ -25,7 +25,8 @@ export function drawTimeline(l: Layout, d: Debrief): void {
 
   const band = (x: { startSec: number; endSec: number }, color: string) =>
     doc.rect(X(x.startSec), top, Math.max(1, X(x.endSec) - X(x.startSec)), plotH).fill(color);
-  for (const x of tl.shaded) band(x, x.kind === 'compressions' ? colors.band : colors.low);
+  const shade = { compressions: colors.band, 'etco2-low': colors.low, rosc: colors.rosc };
+  for (const x of tl.shaded) band(x, shade[x.kind]);
   for (const g of tl.gaps) band(g, colors.gap);
 
   doc.lineWidth(0.4).strokeColor(colors.rule);
@@ -79,7 +80,7 @@ export function drawTimeline(l: Layout, d: Debrief): void {
   );
   doc.y = top + plotH + 26;
   l.text(
-    `Green: compressions on. Red: EtCO2 below ${low} mmHg (dashed line) for the profile's minimum time. Blue: EtCO2 rise (dashed when a confounder came before it). Grey: no capnogram stored (a data gap). Dots: entered values; line: per-breath EtCO2; grey: capnogram.`,
+    `Green: compressions on. Red: EtCO2 below ${low} mmHg (dashed line) for the profile's minimum time. Blue: EtCO2 rise (dashed when a confounder came before it). Light blue: ROSC. Grey: no capnogram stored (a data gap, never a finding). Dots: entered values; line: per-breath EtCO2; grey: capnogram.`,
     l.left,
     doc.y,
     { size: 7.5, color: colors.muted, width: l.width },
@@ -98,18 +99,37 @@ function drawTrace(
   if (tr && tr.tSec.length > 1) {
     // At most ~1,500 points: enough for the page width, small in the file.
     const every = Math.max(1, Math.ceil(tr.tSec.length / 1500));
-    doc.lineWidth(0.3).strokeColor(colors.wave).moveTo(X(tr.tSec[0]), Y(tr.mmHg[0]));
-    for (let i = every; i < tr.tSec.length; i += every) doc.lineTo(X(tr.tSec[i]), Y(tr.mmHg[i]));
-    doc.stroke();
+    const pts: { tSec: number; mmHg: number }[] = [];
+    for (let i = 0; i < tr.tSec.length; i += every)
+      pts.push({ tSec: tr.tSec[i], mmHg: tr.mmHg[i] });
+    doc.lineWidth(0.3).strokeColor(colors.wave);
+    polyline(l, pts, d.timeline.gaps, X, Y);
   }
   const breaths = d.etco2Series.filter((p) => p.source === 'waveform' || p.source === 'stream');
   if (breaths.length > 1) {
-    doc.lineWidth(1).strokeColor(colors.etco2).moveTo(X(breaths[0].tSec), Y(breaths[0].mmHg));
-    for (const p of breaths.slice(1)) doc.lineTo(X(p.tSec), Y(p.mmHg));
-    doc.stroke();
+    doc.lineWidth(1).strokeColor(colors.etco2);
+    polyline(l, breaths, d.timeline.gaps, X, Y);
   }
   for (const p of d.etco2Series.filter((q) => q.source === 'manual' || q.source === 'import'))
     doc.circle(X(p.tSec), Y(p.mmHg), 1.8).fill(colors.etco2);
+}
+
+/** A line through the points that lifts the pen over each data gap (no data is not drawn). */
+function polyline(
+  l: Layout,
+  pts: readonly { tSec: number; mmHg: number }[],
+  gaps: readonly { startSec: number; endSec: number }[],
+  X: (t: number) => number,
+  Y: (v: number) => number,
+): void {
+  const doc = l.doc;
+  pts.forEach((p, i) => {
+    const prev = pts[i - 1];
+    const gap = prev && gaps.some((g) => g.startSec >= prev.tSec && g.startSec < p.tSec);
+    if (!prev || gap) doc.moveTo(X(p.tSec), Y(p.mmHg));
+    else doc.lineTo(X(p.tSec), Y(p.mmHg));
+  });
+  doc.stroke();
 }
 
 function drawRises(l: Layout, d: Debrief, X: (t: number) => number, top: number, h: number): void {

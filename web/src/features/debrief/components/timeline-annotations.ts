@@ -28,6 +28,22 @@ export function annotationsOf(
       drawTime: 'beforeDatasetsDraw',
     };
   });
+  m.rosc.forEach((r, i) => {
+    out[`rosc${i}`] = {
+      type: 'box',
+      xMin: r.startSec,
+      xMax: r.endSec,
+      backgroundColor: 'rgba(31, 111, 178, 0.12)',
+      borderWidth: 0,
+      drawTime: 'beforeDatasetsDraw',
+      label: {
+        display: true,
+        content: 'ROSC',
+        position: { x: 'start', y: 'start' },
+        color: '#1f4e79',
+      },
+    };
+  });
   m.gaps.forEach((g, i) => {
     out[`gap${i}`] = {
       type: 'box',

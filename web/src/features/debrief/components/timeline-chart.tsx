@@ -81,7 +81,7 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
   );
   const yMax = Math.min(
     100,
-    Math.max(40, ...model.breaths.map((p) => p.y), ...model.manual.map((p) => p.y)) + 8,
+    Math.max(40, ...model.breaths.map((p) => p.y ?? 0), ...model.manual.map((p) => p.y)) + 8,
   );
   const shownSpan = (view?.endSec ?? model.durationSec) - (view?.startSec ?? 0);
   const options: ChartOptions<'scatter'> = {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { LocalEtco2, LocalEvent, LocalResuscitation, Tracked } from '../../../lib/offline';
 import { debriefFromLocal } from '../api/offline-debrief';
-import { timelineModel, viewAround } from './timeline-model';
+import { breakAtGaps, timelineModel, viewAround } from './timeline-model';
 
 const arrestAt = '2026-03-04T10:00:00.000Z';
 const at = (s: number) => new Date(Date.parse(arrestAt) + s * 1000).toISOString();
@@ -69,5 +69,23 @@ describe('offline debrief and timeline model', () => {
   it('frames a finding with a margin, clipped to the record', () => {
     expect(viewAround(100, 130, 220)).toEqual({ startSec: 70, endSec: 160 });
     expect(viewAround(5, 10, 220)).toEqual({ startSec: 0, endSec: 40 });
+  });
+
+  it('bands ROSC periods and never draws a line across a data gap', () => {
+    const withRosc = [
+      ...events.slice(0, 5),
+      ev('r', 160, 'rosc'),
+      ev('e', 220, 'end', { reason: 'transferred' }),
+    ];
+    const d = debriefFromLocal({ record, events: withRosc, etco2, context: null });
+    expect(timelineModel(d).rosc).toEqual([{ startSec: 160, endSec: 220 }]);
+    const pts = [10, 20, 60, 70].map((x) => ({ x, y: 30 }));
+    expect(breakAtGaps(pts, [{ startSec: 25, endSec: 55 }]).map((p) => p.y)).toEqual([
+      30,
+      30,
+      null,
+      30,
+      30,
+    ]);
   });
 });

@@ -33,16 +33,37 @@ export interface TimelineModel {
   lowMmHg: number;
   manual: { x: number; y: number }[];
   imported: { x: number; y: number }[];
-  breaths: { x: number; y: number }[];
-  wave: { x: number; y: number }[];
+  /** Per-breath EtCO2 and the capnogram; `y: null` breaks the line at a data gap. */
+  breaths: { x: number; y: number | null }[];
+  wave: { x: number; y: number | null }[];
   markers: Marker[];
   compressions: Band[];
   low: Band[];
+  /** The patient's ROSC periods (capno's patient state). */
+  rosc: Band[];
   gaps: Band[];
   rises: Rise[];
 }
 
 const band = ({ startSec, endSec }: Band): Band => ({ startSec, endSec });
+
+type Point = { x: number; y: number | null };
+
+/** A line never bridges a data gap: a null point at the start of each gap between two points. */
+export function breakAtGaps(points: Point[], gaps: readonly Band[]): Point[] {
+  if (gaps.length === 0) return points;
+  const out: Point[] = [];
+  let g = 0;
+  for (const p of points) {
+    const prev = out[out.length - 1];
+    while (g < gaps.length && gaps[g].startSec < p.x) {
+      if (prev && gaps[g].startSec >= prev.x) out.push({ x: gaps[g].startSec, y: null });
+      g++;
+    }
+    out.push(p);
+  }
+  return out;
+}
 
 /**
  * What the chart draws, from the debrief: the span, ticks, markers, shaded intervals and
@@ -62,9 +83,15 @@ export function timelineModel(d: Debrief): TimelineModel {
     lowMmHg: d.profile.thresholds.lowEtco2MmHg,
     manual: d.etco2Series.filter((p) => p.source === 'manual').map(pt),
     imported: d.etco2Series.filter((p) => p.source === 'import').map(pt),
-    breaths: d.etco2Series.filter((p) => p.source === 'waveform' || p.source === 'stream').map(pt),
+    breaths: breakAtGaps(
+      d.etco2Series.filter((p) => p.source === 'waveform' || p.source === 'stream').map(pt),
+      tl.gaps,
+    ),
     wave: d.waveformTrace
-      ? d.waveformTrace.tSec.map((x, i) => ({ x, y: d.waveformTrace?.mmHg[i] ?? 0 }))
+      ? breakAtGaps(
+          d.waveformTrace.tSec.map((x, i) => ({ x, y: d.waveformTrace?.mmHg[i] ?? 0 })),
+          tl.gaps,
+        )
       : [],
     markers: tl.markers.map((m) => ({
       id: m.id,
@@ -75,6 +102,7 @@ export function timelineModel(d: Debrief): TimelineModel {
     })),
     compressions: tl.shaded.filter((x) => x.kind === 'compressions').map(band),
     low: tl.shaded.filter((x) => x.kind === 'etco2-low').map(band),
+    rosc: tl.shaded.filter((x) => x.kind === 'rosc').map(band),
     gaps: tl.gaps.map(band),
     rises: tl.rises.map((r) => ({
       tSec: r.tSec,
