@@ -5,7 +5,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { buildAll, migrateAndSeed } from './lib/build.mjs';
 import { ensureDependencies } from './lib/deps.mjs';
-import { ensureDatabase, startCluster } from './lib/postgres.mjs';
+import { ensureDatabase, ensureRoles, startCluster } from './lib/postgres.mjs';
 import { log } from './lib/run.mjs';
 import { waitForHttp } from './lib/wait.mjs';
 
@@ -28,7 +28,9 @@ function stopAll(code) {
 
 function main() {
   ensureDependencies(root);
+  // Migrations run as the schema's owner; the API connects as a role with only its grants.
   let databaseUrl = process.env.DATABASE_URL;
+  let migrationUrl = process.env.MIGRATION_DATABASE_URL ?? databaseUrl;
   if (!databaseUrl) {
     const cluster = startCluster({
       dataDir: path.join(root, '.local', 'pg'),
@@ -36,9 +38,12 @@ function main() {
       port: pgPort,
     });
     stops.push(cluster.stop);
-    databaseUrl = ensureDatabase({ bin: cluster.bin, port: pgPort, name: 'upstroke' });
+    ensureDatabase({ bin: cluster.bin, port: pgPort, name: 'upstroke' });
+    const roles = ensureRoles({ bin: cluster.bin, port: pgPort, name: 'upstroke' });
+    databaseUrl = roles.appUrl;
+    migrationUrl = roles.ownerUrl;
   }
-  migrateAndSeed(root, databaseUrl);
+  migrateAndSeed(root, migrationUrl);
   buildAll(root);
   const api = spawn('node', ['api/dist/src/main.js'], {
     cwd: root,

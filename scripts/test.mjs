@@ -5,7 +5,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { migrateAndSeed } from './lib/build.mjs';
 import { ensureDependencies } from './lib/deps.mjs';
-import { ensureDatabase } from './lib/postgres.mjs';
+import { ensureDatabase, ensureRoles } from './lib/postgres.mjs';
 import { aptInstall, capture, log, runAsync } from './lib/run.mjs';
 import { countsOf } from './lib/test-counts.mjs';
 import { startTestApp, startTestCluster } from './lib/test-services.mjs';
@@ -70,7 +70,10 @@ async function main() {
     name: 'upstroke_api_test',
     drop: true,
   });
-  migrateAndSeed(root, databaseUrl);
+  // As under `npm start`: migrated by the owner role, served to the browser tests by the
+  // API's least-privilege role.
+  const roles = ensureRoles({ bin: cluster.bin, port: pgPort, name: 'upstroke_test' });
+  migrateAndSeed(root, roles.ownerUrl);
   const env = {
     ...process.env,
     DATABASE_URL: databaseUrl,
@@ -112,7 +115,7 @@ async function main() {
       NODE_ENV: 'production',
       LOG_LEVEL: 'warn',
       PORT: String(app),
-      DATABASE_URL: databaseUrl,
+      DATABASE_URL: roles.appUrl,
       WEB_DIST: path.join(root, 'web', 'dist'),
       SMTP_SINK_PORT: String(smtp),
       SMTP_PORT: String(smtp),

@@ -1,7 +1,19 @@
 import path from 'node:path';
 import knex from 'knex';
+import { applyGrants } from '../../db/src/grants';
 
-/** Migrations run once per test run; each test then starts from an empty clinical store. */
+// Shared with scripts/lib/postgres.mjs (plain CommonJS so both can load it).
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const roles = require('../../scripts/lib/db-roles.cjs') as {
+  appRole: string;
+  rolesSql: (database: string) => string;
+};
+
+/**
+ * Migrations run once per test run; each test then starts from an empty clinical store.
+ * The owner and app roles are made as `npm start` makes them, so the privilege tests can
+ * connect as the API's role.
+ */
 export default async function globalSetup(): Promise<void> {
   const url =
     process.env.TEST_DATABASE_URL ??
@@ -17,6 +29,8 @@ export default async function globalSetup(): Promise<void> {
   });
   try {
     await db.migrate.latest();
+    await db.raw(roles.rolesSql(new URL(url).pathname.slice(1)));
+    await applyGrants(db, roles.appRole);
   } finally {
     await db.destroy();
   }

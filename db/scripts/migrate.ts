@@ -1,7 +1,11 @@
 import knex from 'knex';
 import { knexConfig } from '../src/config';
+import { applyGrants } from '../src/grants';
 
-/** Applies every pending migration (`npm run db:migrate`; `--rollback` undoes the last batch). */
+/**
+ * Applies every pending migration (`npm run db:migrate`; `--rollback` undoes the last
+ * batch), then grants the API's role (DB_APP_ROLE, default upstroke_app) its privileges.
+ */
 async function main(): Promise<void> {
   const db = knex(knexConfig());
   try {
@@ -13,6 +17,7 @@ async function main(): Promise<void> {
       console.log(
         names.length ? `migrated (batch ${batch}): ${names.join(', ')}` : 'database up to date',
       );
+      await applyGrants(db, process.env.DB_APP_ROLE ?? 'upstroke_app');
     }
   } finally {
     await db.destroy();

@@ -1,7 +1,10 @@
 // The project's own PostgreSQL on loopback, from Debian's packages, with data under .local/.
 import fs from 'node:fs';
+import { createRequire } from 'node:module';
 import path from 'node:path';
 import { aptInstall, capture, isRoot, log, run } from './run.mjs';
+
+const { appRole, ownerRole, rolesSql } = createRequire(import.meta.url)('./db-roles.cjs');
 
 function findBinDir() {
   const root = '/usr/lib/postgresql';
@@ -124,4 +127,18 @@ export function ensureDatabase({ bin, port, name, drop = false }) {
   if (exists.stdout.trim() !== '1')
     run(psql, [...base, `create database "${name}"`], { stdio: 'ignore' });
   return `postgres://postgres@127.0.0.1:${port}/${name}`;
+}
+
+/**
+ * Makes the owner role (migrations, seeds) and the API's role (least privilege) for the
+ * database `name` and returns a URL for each (trust authentication on loopback).
+ */
+export function ensureRoles({ bin, port, name }) {
+  const psql = path.join(bin, 'psql');
+  const target = ['-h', '127.0.0.1', '-p', String(port), '-U', 'postgres', '-d', name];
+  run(psql, [...target, '-v', 'ON_ERROR_STOP=1', '-qc', rolesSql(name)], {
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  const url = (role) => `postgres://${role}@127.0.0.1:${port}/${name}`;
+  return { ownerUrl: url(ownerRole), appUrl: url(appRole) };
 }
