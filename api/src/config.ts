@@ -16,7 +16,6 @@ export interface AppConfig {
   /** pino level for request logs; `silent` under tests. */
   logLevel: string;
   /** IANA time zone of the clock times in PDF reports (the server's own when unset). */
-  reportTimeZone: string | undefined;
   /** How often the outbox worker retries queued mail; 0 = never (tests call it directly). */
   mailRetryIntervalMs: number;
 }
@@ -43,7 +42,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     smtpSinkPort: env.SMTP_SINK_PORT ? Number(env.SMTP_SINK_PORT) : null,
     dbPoolMax: Number(env.DB_POOL_MAX ?? 10),
     logLevel: test ? 'silent' : (env.LOG_LEVEL ?? 'info'),
-    reportTimeZone: env.REPORT_TIME_ZONE || undefined,
     mailRetryIntervalMs: test ? 0 : Number(env.MAIL_RETRY_INTERVAL_MS ?? 30_000),
   };
 }

@@ -86,6 +86,26 @@ describe('PDF report', () => {
     expect(text).not.toContain('a.lead@kestrel.test');
   });
 
+  it('writes clock times in the site time zone, locale and clock', async () => {
+    const { url } = await signedRecord(t);
+    await t
+      .db('sites')
+      .where({ id: demoSiteId })
+      .update({ locale: 'en-US', timeZone: 'America/New_York', clock: '12h' });
+    try {
+      const text = squash(execFileSync('pdftotext', [await pdfOf(url), '-'], { encoding: 'utf8' }));
+      // The fixture's arrest is 2026-03-04T10:00:00Z; New York keeps EST (UTC−5) until the
+      // second Sunday of March (IANA tz database), so 05:00 in the morning there.
+      expect(text).toContain(squash('Mar 4, 2026, 05:00:00 AM'));
+      expect(text).toContain(squash('Times are shown in America/New_York (EST)'));
+    } finally {
+      await t
+        .db('sites')
+        .where({ id: demoSiteId })
+        .update({ locale: 'en-GB', timeZone: 'Europe/London', clock: '24h' });
+    }
+  });
+
   it('uses the site paper size and lets quality download but not recorders or admins', async () => {
     const { url } = await signedRecord(t);
     const a4 = execFileSync('pdfinfo', [await pdfOf(url)], { encoding: 'utf8' });

@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import { parse } from 'csv-parse/sync';
 import type { TrendsResponse, UtsteinSummary } from '@upstroke/contracts';
 import { fixtureRows, insertFixture, type FixtureRow } from './quality-fixtures';
 import { demoSiteId, demoUnits, startTestApp, type TestApp } from './test-app';
@@ -129,7 +130,7 @@ describe('trends: figures, scope and exports', () => {
     );
   });
 
-  it('streams the records table and the summary as CSV with a header and ISO dates', async () => {
+  it('streams the records and the summary as CSV: worded headers with units, rounded values', async () => {
     const res = await t
       .http()
       .get('/api/trends/export.csv')
@@ -137,19 +138,35 @@ describe('trends: figures, scope and exports', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/text\/csv; charset=utf-8/);
     const lines = res.text.trim().split('\r\n');
-    expect(lines[0].split(',').slice(0, 4)).toEqual([
-      'resuscitation_id',
-      'site',
-      'unit',
-      'arrest_at',
-    ]);
+    const table = parse(res.text, { relaxColumnCount: false }) as string[][];
+    const header = table[0];
+    expect(header.slice(0, 4)).toEqual(['Record id', 'Site', 'Unit', 'Arrest time (UTC)']);
+    expect(header).toContain('Findings: Low EtCO2 (count)');
+    expect(header.join(',')).not.toMatch(/_|etco2-low|\bsec\b/);
     expect(lines).toHaveLength(rows.length + 1);
     expect(lines[1].split(',')[3]).toBe('2026-01-03T10:00:00.000Z');
+    // Each share in percent to 0.1 and each time to the whole second, from the inserted rows.
+    const col = (name: string) => header.indexOf(name);
+    for (const cells of table.slice(1)) {
+      const row = rows.find((r) => r.id === cells[0]);
+      if (!row) throw new Error(`unexpected record ${cells[0]}`);
+      const cf = row.compressionFraction;
+      expect(cells[col('Compression fraction (%)')]).toBe(
+        cf === null ? '' : String(Math.round(cf * 1000) / 10),
+      );
+      const shock = row.timeToFirstShockSec;
+      expect(cells[col('Time to first shock (s)')]).toBe(
+        shock === null ? '' : String(Math.round(shock)),
+      );
+      expect(cells[col('Outcome')]).not.toMatch(/-/);
+    }
     const u = await t
       .http()
       .get('/api/trends/utstein.csv?from=2026-01-01')
       .set(...(await as('admin')));
-    expect(u.text.split('\r\n')[0]).toBe('element,count,denominator,percent,period_from,period_to');
+    expect(u.text.split('\r\n')[0]).toBe(
+      'Element,Count,Of (treated arrests),Share (%),Period from,Period to (not included)',
+    );
     expect(u.text).toContain(`Treated arrests,${rows.length},${rows.length},100,2026-01-01,`);
   });
 

@@ -6,7 +6,7 @@ import {
   type StoredWaveformChunk,
   synthCapnogram,
 } from '@upstroke/capno';
-import type { Debrief } from '@upstroke/contracts';
+import { type Debrief, defaultDisplayFormat } from '@upstroke/contracts';
 
 const ARREST = Date.parse('2026-03-04T10:00:00.000Z');
 const at = (sec: number) => new Date(ARREST + sec * 1000);
@@ -76,6 +76,7 @@ export function longRecordParts(
     ageGroup: 'adult',
     weightKg: 80,
     status: 'signed',
+    display: defaultDisplayFormat,
     witnessed: true,
     monitored: true,
     firstRhythm: 'vf',

@@ -26,6 +26,10 @@ export async function seedOrganisation(knex: Knex): Promise<void> {
       name: 'Kestrel Bay Regional Hospital',
       etco2_unit: 'mmHg',
       paper_size: 'A4',
+      locale: 'en-GB',
+      time_zone: 'Europe/London',
+      clock: '24h',
+      mail_domains: ['kestrel.test'],
     })
     .onConflict('id')
     .ignore();

@@ -1,6 +1,11 @@
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
-import type { ReviewQueueItem } from '@upstroke/contracts';
+import {
+  defaultDisplayFormat,
+  formatDateTime,
+  type RecordingContext,
+  type ReviewQueueItem,
+} from '@upstroke/contracts';
 import type { Browser } from 'playwright-core';
 import { launchBrowser, newTabletContext, signIn } from '../support/browser';
 import { baseUrl, demoPassword, emailOf } from '../support/env';
@@ -14,7 +19,7 @@ function quarterOf(iso: string): { from: string; to: string } {
 }
 
 /** A signed demo record awaiting review (the demo seed signs most of its records). */
-async function recordAwaitingReview(): Promise<ReviewQueueItem> {
+async function recordAwaitingReview(): Promise<{ item: ReviewQueueItem; when: string }> {
   const login = await fetch(`${baseUrl}/api/auth/login`, {
     method: 'POST',
     headers: { 'Content-Type': 'application/json' },
@@ -27,7 +32,12 @@ async function recordAwaitingReview(): Promise<ReviewQueueItem> {
   const { items } = (await res.json()) as { items: ReviewQueueItem[] };
   const item = items.find((i) => i.unitName);
   assert.ok(item, 'the demo seed leaves signed records awaiting review');
-  return item;
+  // Screens write the arrest time in the site's language, zone and clock (Admin → Sites).
+  const context = (await (
+    await fetch(`${baseUrl}/api/context`, { headers: { Authorization: `Bearer ${accessToken}` } })
+  ).json()) as RecordingContext;
+  const display = context.sites.find((s) => s.id === item.siteId)?.display;
+  return { item, when: formatDateTime(item.arrestAt, display ?? defaultDisplayFormat) };
 }
 
 describe('quality committee reviews a record found through Trends', () => {
@@ -39,8 +49,7 @@ describe('quality committee reviews a record found through Trends', () => {
   after(() => close());
 
   it('filters to one unit and one quarter, opens the record, marks it reviewed', async () => {
-    const target = await recordAwaitingReview();
-    const when = target.arrestAt.slice(0, 16).replace('T', ' ');
+    const { item: target, when } = await recordAwaitingReview();
     const { from, to } = quarterOf(target.arrestAt);
     const context = await newTabletContext(browser);
     const page = await context.newPage();

@@ -76,6 +76,47 @@ describe('admin: sites and units, audit log, mail viewer', () => {
     expect(blank.body.details[0]).toEqual({ path: 'name', message: 'Enter the unit name' });
   });
 
+  it('keeps each site’s language, time zone, clock and mail domains; refuses an unknown zone', async () => {
+    const auth = await t.as('admin');
+    const ok = await t
+      .http()
+      .patch(`/api/sites/${demoSiteId}`)
+      .set(...auth)
+      .send({ timeZone: 'Pacific/Auckland', clock: '12h', mailDomains: ['Kestrel.test'] });
+    expect(ok.status).toBe(200);
+    expect(ok.body).toMatchObject({
+      locale: 'en-GB',
+      timeZone: 'Pacific/Auckland',
+      clock: '12h',
+      mailDomains: ['kestrel.test'],
+    });
+    const context = await t
+      .http()
+      .get('/api/context')
+      .set(...auth);
+    expect(context.body.sites[0].display).toEqual({
+      locale: 'en-GB',
+      timeZone: 'Pacific/Auckland',
+      clock: '12h',
+    });
+    const bad = await t
+      .http()
+      .patch(`/api/sites/${demoSiteId}`)
+      .set(...auth)
+      .send({ timeZone: 'Atlantis/Capital' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.details[0]).toEqual({
+      path: 'timeZone',
+      message: 'Enter a time zone such as Europe/London',
+    });
+    const after = await t.db('sites').where({ id: demoSiteId }).first();
+    expect(after.timeZone).toBe('Pacific/Auckland');
+    await t
+      .db('sites')
+      .where({ id: demoSiteId })
+      .update({ timeZone: 'Europe/London', clock: '24h' });
+  });
+
   it('lists the audit trail with filters and paging, and exports it as CSV', async () => {
     const auth = await t.as('admin');
     const all = await t

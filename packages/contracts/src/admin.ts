@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isoDateTimeSchema, roleSchema, uuidSchema } from './common.js';
+import { clockSchema, displayFormatSchema } from './formats.js';
 
 export * from './profile-fields.js';
 export * from './profile-guard.js';
@@ -78,12 +79,28 @@ const unitNameField = z
   .trim()
   .min(1, { error: 'Enter the unit name' })
   .max(80, { error: 'Keep the name under 80 characters' });
+const mailDomainField = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .regex(/^[a-z0-9]([a-z0-9-]*[a-z0-9])?(\.[a-z0-9]([a-z0-9-]*[a-z0-9])?)+$/, {
+    error: 'Enter a domain such as hospital.example',
+  });
+/** The organisation's e-mail domains: debrief e-mail goes only there (empty: any address). */
+export const mailDomainsSchema = z.array(mailDomainField).max(20);
+const displayFields = {
+  locale: displayFormatSchema.shape.locale,
+  timeZone: displayFormatSchema.shape.timeZone,
+  clock: clockSchema,
+  mailDomains: mailDomainsSchema,
+};
 
 export const siteSchema = z.object({
   id: uuidSchema,
   name: z.string(),
   etco2Unit: etco2DisplayUnitSchema,
   paperSize: paperSizeSchema,
+  ...displayFields,
   units: z.array(z.object({ id: uuidSchema, name: z.string() })),
   profile: z.object({ id: uuidSchema, version: z.number().int(), name: z.string() }).nullable(),
 });
@@ -94,6 +111,10 @@ export const createSiteSchema = z
     name: siteNameField,
     etco2Unit: etco2DisplayUnitSchema,
     paperSize: paperSizeSchema,
+    locale: displayFields.locale.optional(),
+    timeZone: displayFields.timeZone.optional(),
+    clock: clockSchema.optional(),
+    mailDomains: mailDomainsSchema.optional(),
     units: z.array(unitNameField).max(50).optional(),
   })
   .strict();
@@ -104,6 +125,10 @@ export const updateSiteSchema = z
     name: siteNameField.optional(),
     etco2Unit: etco2DisplayUnitSchema.optional(),
     paperSize: paperSizeSchema.optional(),
+    locale: displayFields.locale.optional(),
+    timeZone: displayFields.timeZone.optional(),
+    clock: clockSchema.optional(),
+    mailDomains: mailDomainsSchema.optional(),
   })
   .strict()
   .refine((s) => Object.keys(s).length > 0, { error: 'Nothing to change' });

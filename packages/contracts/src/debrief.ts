@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { analysisOutputSchema, etco2PointSchema } from './analysis.js';
 import { isoDateTimeSchema, uuidSchema } from './common.js';
 import { eventKindSchema } from './events.js';
+import { displayFormatSchema } from './formats.js';
 import { thresholdsSchema } from './profile.js';
 import { patchResuscitationSchema, resuscitationSchema } from './resuscitations.js';
 import { timelineModelSchema } from './timeline.js';
@@ -65,6 +66,7 @@ export const debriefRecordSchema = resuscitationSchema.extend({
   unitName: z.string().nullable(),
   paperSize: z.enum(['A4', 'Letter']),
   etco2Unit: z.enum(['mmHg', 'kPa']),
+  display: displayFormatSchema,
   createdByName: z.string().nullable(),
   signedByName: z.string().nullable(),
 });

@@ -2,31 +2,16 @@
  * Plain words for events, findings and closing details, shared by the Debrief screen, the
  * PDF and the FHIR export so that the record reads the same everywhere.
  */
+import {
+  airwayConfirmationLabels,
+  airwayDeviceLabels,
+  drugLabels,
+  endReasonLabels,
+  labelOf,
+  rhythmLabels,
+  routeLabels,
+} from './labels.js';
 import type { RosterRole } from './site-context.js';
-
-const rhythmNames: Record<string, string> = {
-  vf: 'VF',
-  pvt: 'pulseless VT',
-  pea: 'PEA',
-  asystole: 'asystole',
-  organised: 'organised rhythm',
-};
-
-const drugNames: Record<string, string> = {
-  epinephrine: 'Epinephrine',
-  amiodarone: 'Amiodarone',
-  lidocaine: 'Lidocaine',
-  'sodium-bicarbonate': 'Sodium bicarbonate',
-  calcium: 'Calcium',
-  magnesium: 'Magnesium',
-  other: 'Other drug',
-};
-
-const airwayNames: Record<string, string> = {
-  'bag-mask': 'Bag-mask',
-  supraglottic: 'Supraglottic airway',
-  'tracheal-tube': 'Tracheal tube',
-};
 
 export const eventKindLabels: Record<string, string> = {
   arrest: 'Arrest',
@@ -47,12 +32,12 @@ export const eventKindLabels: Record<string, string> = {
 };
 
 export function rhythmName(r: string | null | undefined): string {
-  return r ? (rhythmNames[r] ?? r) : '—';
+  return labelOf(rhythmLabels, r);
 }
 
 export function drugName(data: Record<string, unknown>): string {
   const d = String(data.drug ?? 'other');
-  return d === 'other' && typeof data.name === 'string' ? data.name : (drugNames[d] ?? d);
+  return d === 'other' && typeof data.name === 'string' ? data.name : labelOf(drugLabels, d);
 }
 
 function str(v: unknown): string {
@@ -74,14 +59,17 @@ export function eventDetails(kind: string, data: Record<string, unknown>): strin
       return `${str(data.energyJ)} J`;
     case 'drug': {
       const dose = data.dose !== undefined ? `${str(data.dose)} ${str(data.unit)}`.trim() : '';
-      const route = data.route ? String(data.route).toUpperCase() : '';
+      const route = data.route ? labelOf(routeLabels, str(data.route)) : '';
       return [drugName(data), dose, route].filter(Boolean).join(' ');
     }
     case 'airway': {
-      const conf = data.confirmation
-        ? `, confirmed by ${String(data.confirmation).replace(/-/g, ' ')}`
-        : '';
-      return `${airwayNames[String(data.device)] ?? str(data.device)}${conf}`;
+      const how = str(data.confirmation);
+      const conf = !how
+        ? ''
+        : how === 'none'
+          ? ', not confirmed'
+          : `, confirmed by ${labelOf(airwayConfirmationLabels, how)}`;
+      return `${labelOf(airwayDeviceLabels, str(data.device))}${conf}`;
     }
     case 'ventilation':
       return data.ratePerMin !== undefined ? `${str(data.ratePerMin)} /min` : '';
@@ -90,11 +78,11 @@ export function eventDetails(kind: string, data: Record<string, unknown>): strin
     case 'pulse':
       return data.present ? 'pulse present' : 'no pulse';
     case 'access':
-      return str(data.route).toUpperCase();
+      return labelOf(routeLabels, str(data.route));
     case 'note':
       return str(data.text);
     case 'end':
-      return endReasonLabels[str(data.reason)] ?? str(data.reason).replace(/-/g, ' ');
+      return data.reason ? labelOf(endReasonLabels, str(data.reason)) : '';
     case 'correction':
       return typeof data.reason === 'string' ? data.reason : '';
     default:
@@ -109,38 +97,6 @@ export function eventLabel(kind: string, data: Record<string, unknown>): string 
   const name = eventKindLabels[kind] ?? kind;
   return details && kind !== 'note' ? `${name}: ${details}` : name;
 }
-
-/**
- * The End choices as the recorder sees them. `rosc-sustained` keeps its contract name but
- * reads "ROSC at end of record": a tap cannot know that ROSC lasted the 20 min that Utstein
- * calls sustained (Nolan 2019); the analysis decides that from the times.
- */
-export const endReasonLabels: Record<string, string> = {
-  'rosc-sustained': 'ROSC at end of record',
-  terminated: 'Terminated',
-  transferred: 'Transferred',
-};
-
-export const outcomeLabels: Record<string, string> = {
-  'rosc-sustained': 'ROSC, sustained',
-  'rosc-not-sustained': 'ROSC, not sustained',
-  died: 'Died',
-  transferred: 'Transferred',
-};
-
-export const findingKindLabels: Record<string, string> = {
-  'etco2-low': 'Low EtCO2',
-  'etco2-rise': 'EtCO2 rise',
-  'etco2-prognosis-caution': 'EtCO2 after 20 min',
-  'pause-long': 'Long pause',
-  'preshock-pause-long': 'Long pre-shock pause',
-  'rhythm-check-late': 'Late rhythm check',
-  'epinephrine-interval': 'Epinephrine interval',
-  'ventilation-fast': 'Fast ventilation',
-  'waveform-absent': 'No waveform',
-  'airway-unconfirmed': 'Airway unconfirmed',
-  rebreathing: 'Rebreathing',
-};
 
 /** "12:05" from seconds after the arrest ("-0:10" before it). */
 export function clockFromArrest(sec: number): string {

@@ -12,3 +12,5 @@ export * from './admin.js';
 export * from './monitor.js';
 export * from './plausibility.js';
 export * from './live-feed.js';
+export * from './labels.js';
+export * from './formats.js';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isoDateTimeSchema, uuidSchema } from './common.js';
+import { displayFormatSchema } from './formats.js';
 import { thresholdsSchema } from './profile.js';
 
 /** Who was at the bedside and in which role (filled during or after the code). */
@@ -22,6 +23,8 @@ export const siteContextSchema = z.object({
   id: uuidSchema,
   name: z.string(),
   etco2Unit: z.enum(['mmHg', 'kPa']),
+  /** How dates and times are written for this site (absent in a tablet's older cache). */
+  display: displayFormatSchema.optional(),
   units: z.array(z.object({ id: uuidSchema, name: z.string() })),
   profile: z
     .object({ id: uuidSchema, version: z.number().int(), thresholds: thresholdsSchema })

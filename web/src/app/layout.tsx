@@ -11,6 +11,7 @@ import {
   Tooltip,
   Typography,
 } from '@mui/material';
+import { roleLabels } from '@upstroke/contracts';
 import { NavLink, Outlet } from 'react-router-dom';
 import { useAuth } from '../features/auth/use-auth';
 import { useColorMode } from '../hooks/use-color-mode';
@@ -65,7 +66,7 @@ export function Layout() {
             sx={{ display: { xs: 'none', md: 'block' } }}
             aria-label="Signed in as"
           >
-            {user?.name} · {user?.role}
+            {user?.name} · {user ? roleLabels[user.role] : ''}
           </Typography>
           <Tooltip title="Sign out">
             <IconButton color="inherit" onClick={signOut} aria-label="Sign out">

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatDuration, formatPercent } from './format';
+import { formatDuration } from './format';
 
 describe('format', () => {
   it('shows durations as m:ss and h:mm:ss', () => {
@@ -7,9 +7,5 @@ describe('format', () => {
     expect(formatDuration(125)).toBe('2:05');
     expect(formatDuration(3725)).toBe('1:02:05');
     expect(formatDuration(null)).toBe('—');
-  });
-  it('shows fractions as percentages', () => {
-    expect(formatPercent(0.834)).toBe('83 %');
-    expect(formatPercent(undefined)).toBe('—');
   });
 });

@@ -7,13 +7,3 @@ export function formatDuration(totalSec: number | null | undefined): string {
   const sec = String(s % 60).padStart(2, '0');
   return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${sec}` : `${m}:${sec}`;
 }
-
-export function formatPercent(fraction: number | null | undefined, digits = 0): string {
-  if (fraction === null || fraction === undefined || !Number.isFinite(fraction)) return '—';
-  return `${(fraction * 100).toFixed(digits)} %`;
-}
-
-export function formatDateTime(iso: string | null | undefined): string {
-  if (!iso) return '—';
-  return new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-}

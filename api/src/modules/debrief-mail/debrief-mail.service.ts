@@ -2,8 +2,13 @@ import { Inject, Injectable } from '@nestjs/common';
 import {
   clockFromArrest,
   type Debrief,
+  findingKindLabels,
+  formatDate,
+  formatDateTime,
+  formatPercent,
   outcomeLabels,
   type SendDebriefEmail,
+  severityLabels,
 } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { forbidden } from '../../common/errors';
@@ -13,7 +18,7 @@ import { DebriefService } from '../debrief/debrief.service';
 import { ExportsService, fileName } from '../exports/exports.service';
 import { MailService } from '../mail/mail.service';
 
-const pct = (f: number | null) => (f === null ? '—' : `${Math.round(f * 100)} %`);
+const pct = formatPercent;
 
 /** Plain-text summary: no patient reference in the message itself (it is in the PDF). */
 export function summaryText(d: Debrief, link: string, message?: string): string {
@@ -21,14 +26,19 @@ export function summaryText(d: Debrief, link: string, message?: string): string 
   const m = d.measures;
   const lines = [
     message ? `${message}\n` : '',
-    `Debrief of the resuscitation on ${new Date(r.arrestAt).toUTCString()}`,
+    `Debrief of the resuscitation on ${formatDateTime(r.arrestAt, r.display)} (${r.display.timeZone})`,
     `${r.siteName}${r.unitName ? `, ${r.unitName}` : ''}${r.location ? `, ${r.location}` : ''}`,
     `Status: ${r.status === 'signed' ? 'signed' : 'not signed yet (draft)'}; outcome: ${r.outcome ? outcomeLabels[r.outcome] : 'not recorded'}`,
     '',
     `Duration ${clockFromArrest(m.durationSec)} · compression fraction ${pct(m.compressionFraction)} · longest pause ${m.longestPauseSec === null ? '—' : `${Math.round(m.longestPauseSec)} s`}`,
     `EtCO2 median ${m.etco2.medianMmHg === null ? '—' : `${Math.round(m.etco2.medianMmHg)} mmHg`} · CPR time ≥ 10 mmHg ${pct(m.etco2.fractionAtOrAbove10)}`,
     `Findings: ${d.findings.length}`,
-    ...d.findings.slice(0, 10).map((f) => `- ${clockFromArrest(f.startSec)} ${f.message}`),
+    ...d.findings
+      .slice(0, 10)
+      .map(
+        (f) =>
+          `- ${clockFromArrest(f.startSec)} ${findingKindLabels[f.kind]} (${severityLabels[f.severity]}): ${f.message}`,
+      ),
     '',
     `Open the debrief: ${link}`,
     'The full record is attached as a PDF.',
@@ -36,6 +46,13 @@ export function summaryText(d: Debrief, link: string, message?: string): string 
     'Decision support only: follow your local resuscitation protocol and clinical judgement.',
   ];
   return lines.filter((l, i) => l !== '' || i > 0).join('\n');
+}
+
+/** The subject says plainly when the record is a draft, so nobody files it as the signed one. */
+export function debriefSubject(d: Debrief): string {
+  const r = d.record;
+  const draft = r.status === 'signed' ? '' : 'Draft — not signed: ';
+  return `${draft}Resuscitation debrief — ${r.siteName}, ${formatDate(r.arrestAt, r.display)}`;
 }
 
 /** E-mails the debrief (summary, link, PDF) through the outbox: never lost if SMTP is down. */
@@ -56,7 +73,7 @@ export class DebriefMailService {
     const link = `${this.config.publicUrl}/debrief/${id}`;
     const status = await this.mail.send({
       to: body.recipients,
-      subject: `Resuscitation debrief — ${d.record.siteName}, ${d.record.arrestAt.slice(0, 10)}`,
+      subject: debriefSubject(d),
       text: summaryText(d, link, body.message),
       attachments: [{ filename: fileName(d, 'pdf'), content: pdf, contentType: 'application/pdf' }],
       resuscitationId: id,

@@ -1,11 +1,13 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
+import { defaultDisplayFormat, type DisplayFormat } from '@upstroke/contracts';
 import { KNEX, type Db } from '../../db/knex';
 
 export interface RecordContext {
   siteName: string;
   paperSize: 'A4' | 'Letter';
   etco2Unit: 'mmHg' | 'kPa';
+  display: DisplayFormat;
   unitName: string | null;
   createdByName: string | null;
   signedByName: string | null;
@@ -40,11 +42,13 @@ export class DebriefRepository {
   }): Promise<RecordContext> {
     const site = await this.db('sites')
       .where({ id: record.siteId })
-      .first<{ name: string; paperSize: 'A4' | 'Letter'; etco2Unit: 'mmHg' | 'kPa' }>(
-        'name',
-        'paperSize',
-        'etco2Unit',
-      );
+      .first<
+        Omit<
+          RecordContext,
+          'siteName' | 'display' | 'unitName' | 'createdByName' | 'signedByName'
+        > &
+          DisplayFormat & { name: string }
+      >('name', 'paperSize', 'etco2Unit', 'locale', 'timeZone', 'clock');
     const unit = record.unitId
       ? await this.db('units').where({ id: record.unitId }).first<{ name: string }>('name')
       : undefined;
@@ -53,6 +57,9 @@ export class DebriefRepository {
       siteName: site?.name ?? '',
       paperSize: site?.paperSize ?? 'A4',
       etco2Unit: site?.etco2Unit ?? 'mmHg',
+      display: site
+        ? { locale: site.locale, timeZone: site.timeZone, clock: site.clock }
+        : defaultDisplayFormat,
       unitName: unit?.name ?? null,
       createdByName: record.createdBy ? (names.get(record.createdBy) ?? null) : null,
       signedByName: record.signedBy ? (names.get(record.signedBy) ?? null) : null,

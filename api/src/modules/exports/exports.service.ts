@@ -36,7 +36,6 @@ export class ExportsService {
     return renderReportPdf(d, {
       version: appVersion(),
       generatedAt: new Date(),
-      timeZone: this.config.reportTimeZone,
     });
   }
 

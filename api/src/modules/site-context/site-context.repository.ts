@@ -5,6 +5,9 @@ export interface SiteRow {
   id: string;
   name: string;
   etco2Unit: 'mmHg' | 'kPa';
+  locale: string;
+  timeZone: string;
+  clock: '24h' | '12h';
 }
 export interface UnitRow {
   id: string;
@@ -28,7 +31,7 @@ export class SiteContextRepository {
     return this.db<SiteRow>('sites')
       .whereIn('id', ids)
       .orderBy('name')
-      .select('id', 'name', 'etco2Unit');
+      .select('id', 'name', 'etco2Unit', 'locale', 'timeZone', 'clock');
   }
 
   async unitsBySites(siteIds: string[]): Promise<UnitRow[]> {

@@ -36,6 +36,7 @@ export class SiteContextService {
         id: s.id,
         name: s.name,
         etco2Unit: s.etco2Unit,
+        display: { locale: s.locale, timeZone: s.timeZone, clock: s.clock },
         units: units.filter((u) => u.siteId === s.id).map((u) => ({ id: u.id, name: u.name })),
         profile: profileOf(profiles.find((p) => p.siteId === s.id)),
       })),

@@ -7,6 +7,10 @@ export interface SiteRow {
   name: string;
   etco2Unit: 'mmHg' | 'kPa';
   paperSize: 'A4' | 'Letter';
+  locale: string;
+  timeZone: string;
+  clock: '24h' | '12h';
+  mailDomains: string[];
 }
 
 export interface UnitRow {
@@ -35,7 +39,7 @@ export class SitesRepository {
     return this.db<SiteRow>('sites')
       .whereIn('id', ids)
       .orderBy('name')
-      .select('id', 'name', 'etco2Unit', 'paperSize');
+      .select('id', 'name', 'etco2Unit', 'paperSize', 'locale', 'timeZone', 'clock', 'mailDomains');
   }
 
   async unitsOf(siteIds: string[]): Promise<UnitRow[]> {

@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
 import {
   type CreateSite,
+  defaultDisplayFormat,
   type List,
   type Site,
   thresholdDefaults,
@@ -66,7 +67,16 @@ export class SitesService {
     await this.sites.inTransaction(async (trx) => {
       const organisationAdmins = await this.scope.organisationAdminIds(trx);
       await this.sites.insert(
-        { id, name: body.name, etco2Unit: body.etco2Unit, paperSize: body.paperSize },
+        {
+          id,
+          name: body.name,
+          etco2Unit: body.etco2Unit,
+          paperSize: body.paperSize,
+          locale: body.locale ?? defaultDisplayFormat.locale,
+          timeZone: body.timeZone ?? defaultDisplayFormat.timeZone,
+          clock: body.clock ?? defaultDisplayFormat.clock,
+          mailDomains: body.mailDomains ?? [],
+        },
         trx,
       );
       for (const name of unitNames) await this.sites.insertUnit(id, name, trx);

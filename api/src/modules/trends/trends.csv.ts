@@ -1,41 +1,69 @@
-import { findingKindSchema, type UtsteinSummary } from '@upstroke/contracts';
+import {
+  ageGroupLabels,
+  endReasonLabels,
+  findingKindLabels,
+  findingKindSchema,
+  labelOf,
+  outcomeLabels,
+  reviewStatusLabels,
+  rhythmLabels,
+  roundTo,
+  type UtsteinSummary,
+  yesNo,
+} from '@upstroke/contracts';
 import { csvLine } from '../../common/csv';
 
-/** Columns of the records export: [header, how to read it from a records-table row]. */
-const baseColumns: [string, (r: Record<string, unknown>) => unknown][] = [
-  ['resuscitation_id', (r) => r.resuscitationId],
-  ['site', (r) => r.siteName],
-  ['unit', (r) => r.unitName],
-  ['arrest_at', (r) => r.arrestAt],
-  ['age_group', (r) => r.ageGroup],
-  ['witnessed', (r) => r.witnessed],
-  ['monitored', (r) => r.monitored],
-  ['first_rhythm', (r) => r.firstRhythm],
-  ['shockable', (r) => r.shockable],
-  ['outcome', (r) => r.outcome],
-  ['end_reason', (r) => r.endReason],
-  ['any_rosc', (r) => r.anyRosc],
-  ['sustained_rosc', (r) => r.sustainedRosc],
-  ['compression_fraction', (r) => r.compressionFraction],
-  ['longest_pause_sec', (r) => r.longestPauseSec],
-  ['preshock_pauses_over_limit', (r) => r.preshockLongCount],
-  ['time_to_first_compression_sec', (r) => r.timeToFirstCompressionSec],
-  ['time_to_first_shock_sec', (r) => r.timeToFirstShockSec],
-  ['time_to_first_epinephrine_sec', (r) => r.timeToFirstEpinephrineSec],
-  ['etco2_documented', (r) => r.etco2Documented],
-  ['median_etco2_mmhg', (r) => r.medianEtco2],
-  ['fraction_etco2_ge_10', (r) => r.fractionGe10],
-  ['fraction_etco2_ge_20', (r) => r.fractionGe20],
-  ['duration_sec', (r) => r.durationSec],
-  ['profile_version', (r) => r.profileVersion],
-  ['review_status', (r) => r.reviewStatus],
+type Row = Record<string, unknown>;
+const num = (v: unknown) =>
+  typeof v === 'number' ? v : v === null || v === undefined ? null : Number(v);
+/** Seconds to the whole second, mmHg to 0.1, shares as percent to 0.1 (their precision). */
+const seconds = (v: unknown) => roundTo(num(v), 0);
+const mmHg = (v: unknown) => roundTo(num(v), 1);
+const percent = (v: unknown) => {
+  const n = num(v);
+  return n === null ? null : roundTo(n * 100, 1);
+};
+const yesNoOf = (v: unknown) => (typeof v === 'boolean' ? yesNo(v) : '');
+const word = (table: Readonly<Record<string, string>>) => (v: unknown) =>
+  typeof v === 'string' ? labelOf(table, v) : '';
+
+/**
+ * Columns of the records export: [header, how to read it from a records-table row]. Headers
+ * are words with their unit; coded values are written in the words of the label table.
+ */
+const baseColumns: [string, (r: Row) => unknown][] = [
+  ['Record id', (r) => r.resuscitationId],
+  ['Site', (r) => r.siteName],
+  ['Unit', (r) => r.unitName],
+  ['Arrest time (UTC)', (r) => r.arrestAt],
+  ['Age group', (r) => word(ageGroupLabels)(r.ageGroup)],
+  ['Witnessed', (r) => yesNoOf(r.witnessed)],
+  ['Monitored', (r) => yesNoOf(r.monitored)],
+  ['First rhythm', (r) => word(rhythmLabels)(r.firstRhythm)],
+  ['Shockable first rhythm', (r) => yesNoOf(r.shockable)],
+  ['Outcome', (r) => word(outcomeLabels)(r.outcome)],
+  ['End reason', (r) => word(endReasonLabels)(r.endReason)],
+  ['Any ROSC', (r) => yesNoOf(r.anyRosc)],
+  ['Sustained ROSC', (r) => yesNoOf(r.sustainedRosc)],
+  ['Compression fraction (%)', (r) => percent(r.compressionFraction)],
+  ['Longest pause (s)', (r) => seconds(r.longestPauseSec)],
+  ['Pre-shock pauses over the limit (count)', (r) => r.preshockLongCount],
+  ['Time to first compressions (s)', (r) => seconds(r.timeToFirstCompressionSec)],
+  ['Time to first shock (s)', (r) => seconds(r.timeToFirstShockSec)],
+  ['Time to first epinephrine (s)', (r) => seconds(r.timeToFirstEpinephrineSec)],
+  ['EtCO2 documented', (r) => yesNoOf(r.etco2Documented)],
+  ['Median EtCO2 during CPR (mmHg)', (r) => mmHg(r.medianEtco2)],
+  ['CPR time with EtCO2 ≥ 10 mmHg (%)', (r) => percent(r.fractionGe10)],
+  ['CPR time with EtCO2 ≥ 20 mmHg (%)', (r) => percent(r.fractionGe20)],
+  ['Duration (s)', (r) => seconds(r.durationSec)],
+  ['Protocol profile version', (r) => r.profileVersion],
+  ['Review', (r) => labelOf(reviewStatusLabels, (r.reviewStatus as string | null) ?? 'awaiting')],
 ];
 
-const findingColumns: [string, (r: Record<string, unknown>) => unknown][] =
-  findingKindSchema.options.map((kind) => [
-    `findings_${kind.replace(/-/g, '_')}`,
-    (r) => (r.findingCounts as Record<string, number> | null)?.[kind] ?? 0,
-  ]);
+const findingColumns: [string, (r: Row) => unknown][] = findingKindSchema.options.map((kind) => [
+  `Findings: ${findingKindLabels[kind]} (count)`,
+  (r) => (r.findingCounts as Record<string, number> | null)?.[kind] ?? 0,
+]);
 
 export const recordCsvColumns = [...baseColumns, ...findingColumns];
 
@@ -45,10 +73,20 @@ export const recordCsvLine = (row: Record<string, unknown>) =>
 
 /** The Utstein summary as CSV: one line per element, then the medians. */
 export function utsteinCsv(s: UtsteinSummary): string {
-  let out = csvLine(['element', 'count', 'denominator', 'percent', 'period_from', 'period_to']);
+  const period = ['Period from', 'Period to (not included)'];
+  let out = csvLine(['Element', 'Count', 'Of (treated arrests)', 'Share (%)', ...period]);
   for (const l of s.lines)
     out += csvLine([l.label, l.count, l.denominator, l.percent, s.from, s.to]);
-  out += csvLine(['measure', 'median', 'n', '', 'period_from', 'period_to']);
-  for (const m of s.medians) out += csvLine([m.label, m.value, m.n, '', s.from, s.to]);
+  out += csvLine(['Measure', 'Median', 'Records (n)', '', ...period]);
+  for (const m of s.medians)
+    out += csvLine([medianLabel(m), medianValue(m), m.n, '', s.from, s.to]);
   return out;
 }
+
+type Median = UtsteinSummary['medians'][number];
+/** Compression fraction is a share: written in percent like every other share here. */
+const medianLabel = (m: Median) => (m.key === 'compressionFraction' ? `${m.label} (%)` : m.label);
+const medianValue = (m: Median) =>
+  m.key === 'compressionFraction'
+    ? percent(m.value)
+    : roundTo(m.value, m.key === 'medianEtco2' ? 1 : 0);

@@ -1,4 +1,4 @@
-import { type DebriefRecord, thresholdDefaults } from '@upstroke/contracts';
+import { type DebriefRecord, defaultDisplayFormat, thresholdDefaults } from '@upstroke/contracts';
 import { describe, expect, it } from 'vitest';
 import { analyze } from '../analyze.js';
 import { composeDebrief, debriefEventsInForce } from './compose.js';
@@ -26,6 +26,7 @@ const header: DebriefRecord = {
   ageGroup: 'adult',
   weightKg: null,
   status: 'signed',
+  display: defaultDisplayFormat,
   witnessed: null,
   monitored: null,
   firstRhythm: null,

@@ -1,6 +1,6 @@
-import { clockFromArrest, type Debrief } from '@upstroke/contracts';
+import { clockFromArrest, type Debrief, formatPercent } from '@upstroke/contracts';
 
-const pct = (f: number | null) => (f === null ? '—' : `${Math.round(f * 100)} %`);
+const pct = (f: number | null) => formatPercent(f);
 const dur = (s: number | null) => (s === null ? '—' : clockFromArrest(s));
 
 /** A short list as is; a long one as count, median and range. */

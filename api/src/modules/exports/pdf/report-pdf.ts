@@ -15,8 +15,6 @@ import { drawTimeline } from './timeline';
 export interface ReportOptions {
   version: string;
   generatedAt: Date;
-  /** IANA zone for clock times (the server's unless configured). */
-  timeZone?: string;
 }
 
 function footer(l: Layout, d: Debrief, opts: ReportOptions): void {
@@ -73,7 +71,7 @@ export function renderReportPdf(d: Debrief, opts: ReportOptions): Promise<Buffer
     doc.on('error', reject);
   });
   registerFonts(doc);
-  const l = new Layout(doc, opts.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone);
+  const l = new Layout(doc, d.record.display);
   drawHeader(l, d);
   l.heading('Timeline');
   drawTimeline(l, d);

@@ -1,5 +1,7 @@
 import {
+  ageGroupLabels,
   clockFromArrest,
+  confounderLabels,
   type Debrief,
   eventDetails,
   eventKindLabels,
@@ -7,11 +9,13 @@ import {
   outcomeLabels,
   rhythmName,
   rosterRoleLabels,
+  severityLabels,
+  timeZoneName,
 } from '@upstroke/contracts';
 import { colors, type Layout } from './layout';
 import { measureRows } from './measures';
 
-const yesNo = (v: boolean | null) => (v === null ? 'not recorded' : v ? 'yes' : 'no');
+const yesNo = (v: boolean | null) => (v === null ? 'not recorded' : v ? 'Yes' : 'No');
 
 export function drawHeader(l: Layout, d: Debrief): void {
   const r = d.record;
@@ -41,7 +45,7 @@ export function drawHeader(l: Layout, d: Debrief): void {
       ],
       [
         'Age group / weight',
-        `${r.ageGroup ?? 'not recorded'}${r.weightKg ? ` / ${r.weightKg} kg` : ''}`,
+        `${r.ageGroup ? ageGroupLabels[r.ageGroup] : 'not recorded'}${r.weightKg ? ` / ${r.weightKg} kg` : ''}`,
       ],
       ['Witnessed', yesNo(r.witnessed)],
       ['Monitored', yesNo(r.monitored)],
@@ -57,7 +61,8 @@ export function drawHeader(l: Layout, d: Debrief): void {
   );
   const team = (r.roster ?? []).map((m) => `${m.name} (${rosterRoleLabels[m.role]})`).join(', ');
   l.text(`Team: ${team || 'not recorded'}`, l.left, l.doc.y, { size: 9, color: colors.ink });
-  l.text(`Times are shown in ${l.timeZone}; "+m:ss" is time from the arrest.`, l.left, l.doc.y, {
+  const zone = `${l.timeZone} (${timeZoneName(r.arrestAt, l.display)})`;
+  l.text(`Times are shown in ${zone}; "+m:ss" is time from the arrest.`, l.left, l.doc.y, {
     size: 7.5,
     color: colors.muted,
   });
@@ -82,14 +87,14 @@ export function drawFindings(l: Layout, d: Debrief): void {
     l.ensure(h);
     const y = l.doc.y;
     const color = colors[f.severity];
-    l.text(f.severity.toUpperCase(), l.left, y, { size: 7.5, weight: 700, color });
+    l.text(severityLabels[f.severity].toUpperCase(), l.left, y, { size: 7.5, weight: 700, color });
     l.text(`+${clockFromArrest(f.startSec)} – +${clockFromArrest(f.endSec)}`, l.left, y + 10, {
       size: 8,
       color: colors.muted,
     });
     const title = findingKindLabels[f.kind] ?? f.kind;
     l.text(
-      `${title}${f.confounder ? ` (after ${f.confounder.replace('-', ' ')})` : ''}`,
+      `${title}${f.confounder ? ` (${confounderLabels[f.confounder]})` : ''}`,
       l.left + 110,
       y,
       { size: 8, weight: 700, color: colors.ink, width: textW },

@@ -2,7 +2,8 @@ import Download from '@mui/icons-material/Download';
 import { Alert, Button, Stack } from '@mui/material';
 import { DataGrid, type GridColDef, type GridPaginationModel } from '@mui/x-data-grid';
 import type { AuditEntry } from '@upstroke/contracts';
-import { useState } from 'react';
+import { type Formatter, useDisplayFormat } from '../../../hooks/use-display-format';
+import { useMemo, useState } from 'react';
 import { ErrorState } from '../../../components/ui/states';
 import { exportAudit } from '../api/export-audit';
 import { type AuditFilters, useAudit } from '../api/list-audit';
@@ -10,12 +11,12 @@ import { apiErrorText } from './api-error';
 import { auditDetailsText } from './audit-details';
 import { AuditFilterBar } from './audit-filters';
 
-const columns: GridColDef<AuditEntry>[] = [
+const columnsFor = (f: Formatter): GridColDef<AuditEntry>[] => [
   {
     field: 'at',
     headerName: 'When',
     width: 190,
-    valueFormatter: (v: string) => new Date(v).toLocaleString(),
+    valueFormatter: (v: string) => f.dateTime(v),
   },
   {
     field: 'userName',
@@ -50,6 +51,8 @@ export function AuditPanel() {
   const [filters, setFilters] = useState<AuditFilters>({});
   const [model, setModel] = useState<GridPaginationModel>({ page: 0, pageSize: 50 });
   const [exportError, setExportError] = useState<unknown>(null);
+  const fmt = useDisplayFormat();
+  const columns = useMemo(() => columnsFor(fmt), [fmt]);
   // An unfinished record id is not sent: the API would answer 400.
   const sent = isUuid(filters.resuscitationId)
     ? filters

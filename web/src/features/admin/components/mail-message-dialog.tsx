@@ -9,6 +9,7 @@ import {
   Typography,
 } from '@mui/material';
 import { ErrorState, Loading } from '../../../components/ui/states';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { useMailMessage } from '../api/list-mail';
 
 /** The text with its web addresses as links (set-password links are opened from here). */
@@ -34,6 +35,7 @@ function Linkified({ text }: { text: string }) {
 
 export function MailMessageDialog({ id, onClose }: { id: number; onClose: () => void }) {
   const message = useMailMessage(id);
+  const { dateTime } = useDisplayFormat();
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="md" aria-labelledby="mail-dialog-title">
       <DialogTitle id="mail-dialog-title">{message.data?.subject ?? 'Message'}</DialogTitle>
@@ -44,7 +46,7 @@ export function MailMessageDialog({ id, onClose }: { id: number; onClose: () => 
           <>
             <Typography color="text.secondary" gutterBottom>
               To {message.data.to.join(', ')} · from {message.data.from ?? '—'} ·{' '}
-              {new Date(message.data.receivedAt).toLocaleString()}
+              {dateTime(message.data.receivedAt)}
             </Typography>
             <Linkified text={message.data.text || '(no plain-text part)'} />
           </>

@@ -2,6 +2,7 @@ import { Alert, Button, Chip, Stack, Typography } from '@mui/material';
 import { DataGrid, type GridColDef, type GridPaginationModel } from '@mui/x-data-grid';
 import type { MailSinkMessage } from '@upstroke/contracts';
 import { useState } from 'react';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { ErrorState } from '../../../components/ui/states';
 import { useMail } from '../api/list-mail';
 import { MailMessageDialog } from './mail-message-dialog';
@@ -10,13 +11,14 @@ import { MailMessageDialog } from './mail-message-dialog';
 export function MailPanel() {
   const [model, setModel] = useState<GridPaginationModel>({ page: 0, pageSize: 25 });
   const [open, setOpen] = useState<number | null>(null);
+  const { dateTime } = useDisplayFormat();
   const mail = useMail({ limit: model.pageSize, offset: model.page * model.pageSize });
   const columns: GridColDef<MailSinkMessage>[] = [
     {
       field: 'receivedAt',
       headerName: 'Received',
       width: 190,
-      valueFormatter: (v: string) => new Date(v).toLocaleString(),
+      valueFormatter: (v: string) => dateTime(v),
     },
     {
       field: 'to',

@@ -9,6 +9,7 @@ import {
   Typography,
 } from '@mui/material';
 import { useState } from 'react';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { EmptyState, ErrorState, Loading } from '../../../components/ui/states';
 import { useProfiles } from '../api/list-profiles';
 import { useSites } from '../api/list-sites';
@@ -20,6 +21,7 @@ export function ProfilesPanel() {
   const [chosenSite, setSite] = useState<string>();
   const siteId = chosenSite ?? sites.data?.items[0]?.id;
   const profiles = useProfiles(siteId);
+  const { dateTime } = useDisplayFormat(siteId);
   const [chosenVersion, setVersion] = useState<string>();
   if (sites.isPending) return <Loading label="Loading sites…" />;
   if (sites.isError) return <ErrorState error={sites.error} onRetry={() => void sites.refetch()} />;
@@ -71,7 +73,7 @@ export function ProfilesPanel() {
                 >
                   <ListItemText
                     primary={`v${p.version} · ${p.name}`}
-                    secondary={new Date(p.createdAt).toLocaleString()}
+                    secondary={dateTime(p.createdAt)}
                   />
                 </ListItemButton>
               ))}

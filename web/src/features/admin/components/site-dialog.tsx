@@ -10,20 +10,26 @@ import {
   Stack,
   TextField,
 } from '@mui/material';
-import { type CreateSite, createSiteSchema, type Site } from '@upstroke/contracts';
+import type { Site } from '@upstroke/contracts';
 import { Controller, useForm } from 'react-hook-form';
 import { useSaveSite } from '../api/save-site';
 import { apiErrorText } from './api-error';
+import { SiteDisplayFields } from './site-display-fields';
+import {
+  siteFormDefaults,
+  type SiteFormInput,
+  type SiteFormOutput,
+  siteFormSchema,
+} from './site-form';
 
-/** Create a site (site = null) or change its name, EtCO2 display unit and paper size. */
+/** Create a site (site = null) or change its name, units of display, clock and e-mail domains. */
 export function SiteDialog({ site, onClose }: { site: Site | null; onClose: () => void }) {
   const save = useSaveSite();
-  const { register, control, handleSubmit, formState } = useForm<CreateSite>({
-    resolver: zodResolver(createSiteSchema.omit({ units: true })),
-    defaultValues: site
-      ? { name: site.name, etco2Unit: site.etco2Unit, paperSize: site.paperSize }
-      : { name: '', etco2Unit: 'mmHg', paperSize: 'A4' },
-  });
+  const { register, control, handleSubmit, formState } = useForm<
+    SiteFormInput,
+    unknown,
+    SiteFormOutput
+  >({ resolver: zodResolver(siteFormSchema), defaultValues: siteFormDefaults(site) });
   const submit = handleSubmit((body) =>
     save.mutate({ id: site?.id, body }, { onSuccess: onClose }),
   );
@@ -65,6 +71,7 @@ export function SiteDialog({ site, onClose }: { site: Site | null; onClose: () =
                 </TextField>
               )}
             />
+            <SiteDisplayFields control={control} register={register} errors={formState.errors} />
           </Stack>
         </DialogContent>
         <DialogActions>

@@ -38,7 +38,8 @@ export function SitesPanel() {
               {site.name}
             </Typography>
             <Typography color="text.secondary" gutterBottom>
-              EtCO2 in {site.etco2Unit} · PDFs on {site.paperSize} ·{' '}
+              EtCO2 in {site.etco2Unit} · PDFs on {site.paperSize} · {site.timeZone},{' '}
+              {site.clock === '24h' ? '24-hour' : '12-hour'} clock ({site.locale}) ·{' '}
               {site.profile
                 ? `Protocol profile v${site.profile.version} (${site.profile.name})`
                 : 'No protocol profile'}

@@ -1,6 +1,7 @@
 import { List, ListItemButton, ListItemText, Paper, Typography } from '@mui/material';
 import { Link } from 'react-router-dom';
-import { formatDateTime } from '../../../lib/format';
+import { labelOf, resuscitationStatusLabels } from '@upstroke/contracts';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
 
 export interface RecordRow {
   id: string;
@@ -19,6 +20,7 @@ export function RecordList({
   rows: RecordRow[];
   empty: string;
 }) {
+  const { dateTime } = useDisplayFormat();
   return (
     <Paper variant="outlined" sx={{ p: 1.5 }}>
       <Typography variant="h2" sx={{ mb: 1 }}>
@@ -31,7 +33,7 @@ export function RecordList({
           {rows.map((r) => (
             <ListItemButton key={r.id} component={Link} to={r.to} sx={{ minHeight: 56 }}>
               <ListItemText
-                primary={`${formatDateTime(r.arrestAt)} · ${r.status}`}
+                primary={`${dateTime(r.arrestAt)} · ${labelOf(resuscitationStatusLabels, r.status)}`}
                 secondary={r.detail}
               />
             </ListItemButton>

@@ -15,13 +15,14 @@ import {
 import { useLiveQuery } from 'dexie-react-hooks';
 import { useState } from 'react';
 import { Loading } from '../../../components/ui/states';
-import { formatDateTime } from '../../../lib/format';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { listSyncProblems, offlineDb, retrySyncProblems, useSyncState } from '../../../lib/offline';
 
 const opText = { create: 'Starting the record', patch: 'Record details or team' } as const;
 
 /** What the server did not accept: shown, kept on the tablet, and sent again on request. */
 function SyncProblemsDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
+  const { dateTime } = useDisplayFormat();
   const problems = useLiveQuery(async () => {
     if (!open) return undefined;
     const found = await listSyncProblems(offlineDb);
@@ -32,13 +33,13 @@ function SyncProblemsDialog({ open, onClose }: { open: boolean; onClose: () => v
       ids.map((id, i) => {
         const r = records[i];
         const name = r
-          ? `code of ${formatDateTime(r.arrestAt)}${r.location ? `, ${r.location}` : ''}`
+          ? `code of ${dateTime(r.arrestAt)}${r.location ? `, ${r.location}` : ''}`
           : `record ${id.slice(0, 8)}`;
         return [id, name];
       }),
     );
     return { ...found, names };
-  }, [open]);
+  }, [open, dateTime]);
   const [retried, setRetried] = useState<number | null>(null);
   const retry = async () => setRetried(await retrySyncProblems(offlineDb));
   return (
@@ -63,7 +64,7 @@ function SyncProblemsDialog({ open, onClose }: { open: boolean; onClose: () => v
             {problems.ops.map((o) => (
               <ListItem key={`op-${o.seq}`} disableGutters>
                 <ListItemText
-                  primary={`${opText[o.op]} · ${problems.names.get(o.resuscitationId)} · ${formatDateTime(new Date(o.createdAt).toISOString())}`}
+                  primary={`${opText[o.op]} · ${problems.names.get(o.resuscitationId)} · ${dateTime(new Date(o.createdAt).toISOString())}`}
                   secondary={`${o.reason}${o.op === 'create' && problems.heldBack ? ` — ${problems.heldBack} entries wait for it` : ''}`}
                 />
               </ListItem>
@@ -71,7 +72,7 @@ function SyncProblemsDialog({ open, onClose }: { open: boolean; onClose: () => v
             {problems.items.map((i) => (
               <ListItem key={i.id} disableGutters>
                 <ListItemText
-                  primary={`${i.label} (${i.what}) · ${problems.names.get(i.resuscitationId)} · ${i.at ? formatDateTime(i.at) : ''}`}
+                  primary={`${i.label} (${i.what}) · ${problems.names.get(i.resuscitationId)} · ${i.at ? dateTime(i.at) : ''}`}
                   secondary={i.reason || 'No reason given'}
                 />
               </ListItem>

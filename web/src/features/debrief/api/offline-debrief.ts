@@ -1,5 +1,5 @@
 import { composeDebrief } from '@upstroke/capno';
-import type { Debrief, DebriefRecord } from '@upstroke/contracts';
+import { type Debrief, type DebriefRecord, defaultDisplayFormat } from '@upstroke/contracts';
 // The mapping file itself (not the offline index): no IndexedDB code comes with it.
 import { type LocalRecord, storedFromLocal } from '../../../lib/offline/stored-record';
 
@@ -33,6 +33,7 @@ function headerOf({ record, context }: LocalRecord): DebriefRecord {
     unitName: site?.units.find((u) => u.id === record.unitId)?.name ?? null,
     paperSize: 'A4',
     etco2Unit: site?.etco2Unit ?? 'mmHg',
+    display: site?.display ?? defaultDisplayFormat,
     createdByName: null,
     signedByName: null,
   };

@@ -1,5 +1,5 @@
 import { Alert, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
-import { type DebriefRecord, outcomeLabels, rhythmName } from '@upstroke/contracts';
+import { type DebriefRecord, formatDateTime, outcomeLabels, rhythmName } from '@upstroke/contracts';
 import { useState } from 'react';
 import { useSign, useUpdateClosing } from '../api/sign-resuscitation';
 import { AmendDialog } from './amend-dialog';
@@ -68,8 +68,8 @@ export function ClosingPanel({ record, canSign }: { record: DebriefRecord; canSi
         <Stack direction="row" spacing={2} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
           <Alert severity="success" sx={{ flex: 1 }}>
             Signed by {record.signedByName ?? 'the lead'} on{' '}
-            {new Date(record.signedAt ?? '').toLocaleString()}. The record is locked; corrections
-            are amendments with a reason.
+            {formatDateTime(record.signedAt, record.display)}. The record is locked; corrections are
+            amendments with a reason.
           </Alert>
           {canSign && (
             <Button variant="contained" onClick={() => setAmending(true)} sx={{ minHeight: 48 }}>

@@ -1,8 +1,10 @@
 import { Alert, Box, Card, CardContent, Chip, Stack, Typography } from '@mui/material';
+import { resuscitationStatusLabels } from '@upstroke/contracts';
 import { useMemo, useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 import { ErrorState, Loading, PageHeader } from '../../../components/ui/states';
+import { formatterFor } from '../../../hooks/use-display-format';
 import { useAuth } from '../../auth/use-auth';
 import { useDebrief } from '../api/get-debrief';
 import { ClosingPanel } from './closing-panel';
@@ -46,20 +48,13 @@ export function DebriefPage() {
     setSelected(i);
     if (model) setView(viewAround(f.startSec, f.endSec, model.durationSec));
   };
-  const title = `Debrief — ${new Date(d.record.arrestAt).toLocaleString()}`;
+  const fmt = formatterFor(d.record.display);
+  const title = `Debrief — ${fmt.dateTime(d.record.arrestAt)}`;
   return (
     <Stack spacing={2}>
       <PageHeader title={title} actions={<ExportActions id={id} offline={offline} />} />
       <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', gap: 1 }}>
-        <Chip
-          label={
-            d.record.status === 'signed'
-              ? 'Signed'
-              : d.record.status === 'closed'
-                ? 'Closed'
-                : 'Open'
-          }
-        />
+        <Chip label={resuscitationStatusLabels[d.record.status]} />
         {d.record.unitName && <Chip variant="outlined" label={d.record.unitName} />}
         {d.record.location && d.record.location !== d.record.unitName && (
           <Chip variant="outlined" label={d.record.location} />
@@ -118,8 +113,7 @@ export function DebriefPage() {
             <Typography variant="subtitle1">Amendments</Typography>
             {d.amendments.map((a) => (
               <Typography key={a.id} variant="body2" sx={{ mt: 0.5 }}>
-                {new Date(a.createdAt).toLocaleString()} — {a.createdByName ?? a.createdBy}:{' '}
-                {a.reason}
+                {fmt.dateTime(a.createdAt)} — {a.createdByName ?? a.createdBy}: {a.reason}
               </Typography>
             ))}
           </Box>

@@ -3,8 +3,10 @@ import { Alert, Chip, List, ListItemButton, ListItemText, Stack, Typography } fr
 import {
   type AgeGroup,
   clockFromArrest,
+  confounderLabels,
   type Finding,
   findingKindLabels,
+  severityLabels,
 } from '@upstroke/contracts';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 
@@ -55,17 +57,17 @@ function FindingItems(props: {
             disableTypography
             primary={
               <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
-                <Chip size="small" label={f.severity} color={chipColor[f.severity]} />
+                <Chip
+                  size="small"
+                  label={severityLabels[f.severity]}
+                  color={chipColor[f.severity]}
+                />
                 <Typography variant="subtitle2">{findingKindLabels[f.kind] ?? f.kind}</Typography>
                 <Typography variant="body2" color="text.secondary">
                   {clockFromArrest(f.startSec)} – {clockFromArrest(f.endSec)}
                 </Typography>
                 {f.confounder && (
-                  <Chip
-                    size="small"
-                    variant="outlined"
-                    label={`after ${f.confounder.replace('-', ' ')}`}
-                  />
+                  <Chip size="small" variant="outlined" label={confounderLabels[f.confounder]} />
                 )}
               </Stack>
             }

@@ -1,9 +1,14 @@
 import HelpOutlined from '@mui/icons-material/HelpOutlineOutlined';
 import { Card, CardContent, Grid, IconButton, Stack, Tooltip, Typography } from '@mui/material';
-import { clockFromArrest, type Measures, measureDefinitions } from '@upstroke/contracts';
+import {
+  clockFromArrest,
+  formatPercent,
+  type Measures,
+  measureDefinitions,
+} from '@upstroke/contracts';
 
 type Key = keyof typeof measureDefinitions;
-const pct = (f: number | null) => (f === null ? '—' : `${Math.round(f * 100)} %`);
+const pct = (f: number | null) => formatPercent(f);
 const dur = (s: number | null) => (s === null ? '—' : clockFromArrest(s));
 
 function cards(m: Measures): { key: Key; title: string; value: string }[] {

@@ -1,6 +1,7 @@
 import { Box, Button, Paper, Stack, Typography } from '@mui/material';
 import { Link } from 'react-router-dom';
-import { formatDateTime, formatDuration } from '../../../lib/format';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
+import { formatDuration } from '../../../lib/format';
 import type { EndSummary } from '../lib/end-summary';
 
 function Fact({ label, value }: { label: string; value: string }) {
@@ -14,15 +15,13 @@ function Fact({ label, value }: { label: string; value: string }) {
   );
 }
 
-const clock = (ms: number) =>
-  new Date(ms).toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' });
-
 /**
  * The code after End: what happened, read-only (no running clock, no buttons that record),
  * and the way on to the debrief.
  */
 export function EndedSummary(props: { recordId: string; arrestAt: string; summary: EndSummary }) {
   const s = props.summary;
+  const fmt = useDisplayFormat();
   const arrestMs = Date.parse(props.arrestAt);
   const rosc = s.roscPeriods.length
     ? s.roscPeriods
@@ -45,8 +44,8 @@ export function EndedSummary(props: { recordId: string; arrestAt: string; summar
             gap: 2,
           }}
         >
-          <Fact label="Arrest" value={formatDateTime(props.arrestAt)} />
-          <Fact label="Ended" value={clock(s.endedAtMs)} />
+          <Fact label="Arrest" value={fmt.dateTime(props.arrestAt)} />
+          <Fact label="Ended" value={fmt.time(new Date(s.endedAtMs).toISOString())} />
           <Fact label="Duration" value={formatDuration(s.durationSec)} />
           <Fact label="Shocks" value={String(s.shocks)} />
           <Fact label="Epinephrine doses" value={String(s.epinephrineDoses)} />

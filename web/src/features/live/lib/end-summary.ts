@@ -1,5 +1,5 @@
 import { intervalsOf, type PatientStateInterval, sustainedRosc } from '@upstroke/capno';
-import { endReasonLabels, type PatchResuscitation } from '@upstroke/contracts';
+import { endReasonLabels, labelOf, type PatchResuscitation } from '@upstroke/contracts';
 import type { LiveState } from './live-state';
 
 /** What the read-only summary of an ended code says (times in ms). */
@@ -30,7 +30,7 @@ export function endSummary(state: LiveState, arrestAt: string): EndSummary | nul
   return {
     endedAtMs,
     durationSec: (endedAtMs - zero) / 1000,
-    reason: endReasonLabels[reason] ?? reason,
+    reason: labelOf(endReasonLabels, reason),
     roscPeriods: rosc.map((r) => ({
       fromMs: zero + r.startSec * 1000,
       toMs: zero + r.endSec * 1000,

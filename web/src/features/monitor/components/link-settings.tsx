@@ -1,5 +1,5 @@
 import { Button, MenuItem, Stack, TextField } from '@mui/material';
-import type { SimulatorScenario } from '@upstroke/contracts';
+import { type SimulatorScenario, simulatorScenarioLabels } from '@upstroke/contracts';
 import { useState } from 'react';
 import { checkLinkUrl, savedLinkUrl, scenarios, simulatorUrl } from '../lib/link-url';
 
@@ -52,7 +52,7 @@ export function LinkSettings({
         >
           {scenarios.map((s) => (
             <MenuItem key={s} value={s}>
-              {s}
+              {simulatorScenarioLabels[s]}
             </MenuItem>
           ))}
         </TextField>

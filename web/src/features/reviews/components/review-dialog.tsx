@@ -15,17 +15,18 @@ import {
   TextField,
   Typography,
 } from '@mui/material';
-import { type ReviewInput, reviewInputSchema, type ReviewQueueItem } from '@upstroke/contracts';
+import {
+  type ReviewInput,
+  reviewInputSchema,
+  type ReviewQueueItem,
+  reviewStatusLabels,
+  reviewStatusSchema,
+} from '@upstroke/contracts';
 import type { z } from 'zod';
 import { Controller, useForm } from 'react-hook-form';
 import { useReviewHistory } from '../api/get-review-history';
 import { useSaveReview } from '../api/save-review';
-
-const statusLabels = {
-  pending: 'Pending',
-  reviewed: 'Reviewed',
-  'needs-follow-up': 'Needs follow-up',
-};
+import { useDisplayFormat } from '../../../hooks/use-display-format';
 
 interface Props {
   item: ReviewQueueItem;
@@ -36,6 +37,7 @@ interface Props {
 export function ReviewDialog({ item, onClose }: Props) {
   const history = useReviewHistory(item.resuscitationId);
   const save = useSaveReview(item.resuscitationId);
+  const { dateTime } = useDisplayFormat(item.siteId);
   const form = useForm<z.input<typeof reviewInputSchema>, unknown, ReviewInput>({
     resolver: zodResolver(reviewInputSchema),
     defaultValues: { status: 'reviewed', comment: '' },
@@ -47,7 +49,7 @@ export function ReviewDialog({ item, onClose }: Props) {
     <Dialog open onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="review-title">
       <form onSubmit={(e) => void submit(e)} noValidate>
         <DialogTitle id="review-title">
-          Review of the arrest on {item.arrestAt.slice(0, 16).replace('T', ' ')} UTC
+          Review of the arrest on {dateTime(item.arrestAt)}
         </DialogTitle>
         <DialogContent>
           {save.error ? <Alert severity="error">{save.error.message}</Alert> : null}
@@ -56,8 +58,13 @@ export function ReviewDialog({ item, onClose }: Props) {
             control={form.control}
             render={({ field }) => (
               <RadioGroup {...field} aria-label="Review status" row>
-                {Object.entries(statusLabels).map(([v, l]) => (
-                  <FormControlLabel key={v} value={v} control={<Radio />} label={l} />
+                {reviewStatusSchema.options.map((v) => (
+                  <FormControlLabel
+                    key={v}
+                    value={v}
+                    control={<Radio />}
+                    label={reviewStatusLabels[v]}
+                  />
                 ))}
               </RadioGroup>
             )}
@@ -79,7 +86,7 @@ export function ReviewDialog({ item, onClose }: Props) {
             {(history.data?.items ?? []).map((r) => (
               <ListItem key={r.id}>
                 <ListItemText
-                  primary={`${statusLabels[r.status]} — ${r.reviewerName}, ${r.at.slice(0, 16).replace('T', ' ')}`}
+                  primary={`${reviewStatusLabels[r.status]} — ${r.reviewerName}, ${dateTime(r.at)}`}
                   secondary={r.comment || 'No comment'}
                 />
               </ListItem>

@@ -10,7 +10,14 @@ import {
   Tabs,
   Typography,
 } from '@mui/material';
-import type { ReviewQueueItem } from '@upstroke/contracts';
+import {
+  labelOf,
+  outcomeLabels,
+  type ReviewQueueItem,
+  reviewStatusLabels,
+  rhythmLabels,
+} from '@upstroke/contracts';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { EmptyState, ErrorState, Loading, PageHeader } from '../../../components/ui/states';
@@ -28,6 +35,7 @@ export function ReviewQueuePage() {
   const [status, setStatus] = useState<QueueStatus>('awaiting');
   const [open, setOpen] = useState<ReviewQueueItem | null>(null);
   const queue = useReviewQueue(status);
+  const { dateTime } = useDisplayFormat();
   return (
     <>
       <PageHeader title="Review queue" />
@@ -50,7 +58,7 @@ export function ReviewQueuePage() {
           <Table size="small" aria-label="Records to review">
             <TableHead>
               <TableRow>
-                <TableCell>Arrest (UTC)</TableCell>
+                <TableCell>Arrest</TableCell>
                 <TableCell>Site / unit</TableCell>
                 <TableCell>First rhythm</TableCell>
                 <TableCell>Outcome</TableCell>
@@ -63,13 +71,17 @@ export function ReviewQueuePage() {
                 <TableRow key={i.resuscitationId}>
                   <TableCell>
                     <Link component={RouterLink} to={`/debrief/${i.resuscitationId}`}>
-                      {i.arrestAt.slice(0, 16).replace('T', ' ')}
+                      {dateTime(i.arrestAt)}
                     </Link>
                   </TableCell>
                   <TableCell>{[i.siteName, i.unitName].filter(Boolean).join(' / ')}</TableCell>
-                  <TableCell>{i.firstRhythm ?? '—'}</TableCell>
-                  <TableCell>{i.outcome ?? '—'}</TableCell>
-                  <TableCell>{i.status ? `${i.status}: ${i.lastComment ?? ''}` : 'none'}</TableCell>
+                  <TableCell>{labelOf(rhythmLabels, i.firstRhythm)}</TableCell>
+                  <TableCell>{labelOf(outcomeLabels, i.outcome)}</TableCell>
+                  <TableCell>
+                    {i.status
+                      ? `${reviewStatusLabels[i.status]}${i.lastComment ? `: ${i.lastComment}` : ''}`
+                      : 'None yet'}
+                  </TableCell>
                   <TableCell>
                     <Button sx={{ minHeight: 48 }} onClick={() => setOpen(i)}>
                       Review

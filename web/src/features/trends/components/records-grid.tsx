@@ -1,28 +1,49 @@
 import { Link } from '@mui/material';
 import { DataGrid, type GridColDef, type GridSortModel } from '@mui/x-data-grid';
-import type { TrendsFilter, TrendsRecord } from '@upstroke/contracts';
-import { useState } from 'react';
+import {
+  formatPercent,
+  labelOf,
+  outcomeLabels,
+  reviewStatusLabels,
+  rhythmLabels,
+  type TrendsFilter,
+  type TrendsRecord,
+} from '@upstroke/contracts';
+import { useMemo, useState } from 'react';
+import { type Formatter, useDisplayFormat } from '../../../hooks/use-display-format';
 import { Link as RouterLink } from 'react-router-dom';
 import { type RecordsPaging, useTrendRecords } from '../api/get-trend-records';
 import { ErrorState } from '../../../components/ui/states';
 
-const pct = (v: unknown) => (typeof v === 'number' ? `${Math.round(v * 100)} %` : '—');
+const pct = (v: unknown) => formatPercent(typeof v === 'number' ? v : null);
 const sec = (v: unknown) => (typeof v === 'number' ? `${Math.round(v)} s` : '—');
 
-const columns: GridColDef<TrendsRecord>[] = [
+const columnsFor = (f: Formatter): GridColDef<TrendsRecord>[] => [
   {
     field: 'arrestAt',
-    headerName: 'Arrest (UTC)',
+    headerName: 'Arrest',
     width: 170,
     renderCell: ({ row }) => (
       <Link component={RouterLink} to={`/debrief/${row.resuscitationId}`}>
-        {row.arrestAt.slice(0, 16).replace('T', ' ')}
+        {f.dateTime(row.arrestAt)}
       </Link>
     ),
   },
   { field: 'unitName', headerName: 'Unit', width: 130, sortable: false },
-  { field: 'firstRhythm', headerName: 'First rhythm', width: 110, sortable: false },
-  { field: 'outcome', headerName: 'Outcome', width: 150, sortable: false },
+  {
+    field: 'firstRhythm',
+    headerName: 'First rhythm',
+    width: 120,
+    sortable: false,
+    valueFormatter: (v: string | null) => labelOf(rhythmLabels, v),
+  },
+  {
+    field: 'outcome',
+    headerName: 'Outcome',
+    width: 150,
+    sortable: false,
+    valueFormatter: (v: string | null) => labelOf(outcomeLabels, v),
+  },
   {
     field: 'compressionFraction',
     headerName: 'Compression fraction',
@@ -43,7 +64,7 @@ const columns: GridColDef<TrendsRecord>[] = [
     headerName: 'Review',
     width: 140,
     sortable: false,
-    valueFormatter: (v) => v ?? 'awaiting',
+    valueFormatter: (v: string | null) => labelOf(reviewStatusLabels, v ?? 'awaiting'),
   },
 ];
 
@@ -56,6 +77,8 @@ export function RecordsGrid({ filter }: { filter: TrendsFilter }) {
     offset: 0,
   });
   const { data, isFetching, error, refetch } = useTrendRecords(filter, paging);
+  const fmt = useDisplayFormat(filter.siteId);
+  const columns = useMemo(() => columnsFor(fmt), [fmt]);
   if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
   const onSort = (model: GridSortModel) => {
     const first = model[0];

@@ -1,13 +1,8 @@
 import { MenuItem, Stack, TextField } from '@mui/material';
-import type { TrendsFilter } from '@upstroke/contracts';
+import { outcomeLabels, type TrendsFilter } from '@upstroke/contracts';
 import { useTrendSites } from '../api/get-sites';
 
-const outcomes = [
-  ['rosc-sustained', 'ROSC sustained'],
-  ['rosc-not-sustained', 'ROSC not sustained'],
-  ['died', 'Died'],
-  ['transferred', 'Transferred'],
-] as const;
+const outcomes = Object.entries(outcomeLabels);
 
 interface Props {
   value: TrendsFilter;

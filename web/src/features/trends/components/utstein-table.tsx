@@ -1,7 +1,22 @@
 import { Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
-import type { TrendsFilter } from '@upstroke/contracts';
+import { formatPercent, type TrendsFilter, type UtsteinSummary } from '@upstroke/contracts';
 import { useUtstein } from '../api/get-utstein';
 import { ErrorState, Loading } from '../../../components/ui/states';
+import { formatDuration } from '../../../lib/format';
+
+type Median = UtsteinSummary['medians'][number];
+
+/** Each median in its own unit: a share as %, times as m:ss, EtCO2 to one decimal. */
+function medianText(m: Median): string {
+  if (m.value === null) return '—';
+  if (m.key === 'compressionFraction') return formatPercent(m.value);
+  if (m.key.startsWith('timeTo')) return formatDuration(m.value);
+  return m.value.toFixed(1);
+}
+
+/** "(s)" in a label is replaced by the m:ss the value is shown in. */
+const medianLabel = (m: Median) =>
+  `Median ${m.label.charAt(0).toLowerCase()}${m.label.slice(1)}`.replace(' (s)', ' (m:ss)');
 
 /** Utstein-style core elements for the filtered period: counts, shares and medians. */
 export function UtsteinTable({ filter }: { filter: TrendsFilter }) {
@@ -19,7 +34,7 @@ export function UtsteinTable({ filter }: { filter: TrendsFilter }) {
           <TableRow>
             <TableCell>Element</TableCell>
             <TableCell align="right">Count</TableCell>
-            <TableCell align="right">%</TableCell>
+            <TableCell align="right">Share</TableCell>
           </TableRow>
         </TableHead>
         <TableBody>
@@ -27,16 +42,27 @@ export function UtsteinTable({ filter }: { filter: TrendsFilter }) {
             <TableRow key={l.key}>
               <TableCell>{l.label}</TableCell>
               <TableCell align="right">{l.count}</TableCell>
-              <TableCell align="right">{l.percent ?? '—'}</TableCell>
+              <TableCell align="right">
+                {l.percent === null ? '—' : formatPercent(l.percent / 100, 1)}
+              </TableCell>
             </TableRow>
           ))}
+        </TableBody>
+      </Table>
+      <Table size="small" aria-label="Medians" sx={{ mt: 2 }}>
+        <TableHead>
+          <TableRow>
+            <TableCell>Median</TableCell>
+            <TableCell align="right">Value</TableCell>
+            <TableCell align="right">Records (n)</TableCell>
+          </TableRow>
+        </TableHead>
+        <TableBody>
           {data.medians.map((m) => (
             <TableRow key={m.key}>
-              <TableCell>Median {m.label.charAt(0).toLowerCase() + m.label.slice(1)}</TableCell>
-              <TableCell align="right">
-                {m.value === null ? '—' : Math.round(m.value * 100) / 100}
-              </TableCell>
-              <TableCell align="right">n = {m.n}</TableCell>
+              <TableCell>{medianLabel(m)}</TableCell>
+              <TableCell align="right">{medianText(m)}</TableCell>
+              <TableCell align="right">{m.n}</TableCell>
             </TableRow>
           ))}
         </TableBody>
