@@ -12,7 +12,7 @@ describe('trends records CSV', () => {
     const cells = line.split(',');
     expect(cells[1]).toBe("'@Kestrel");
     expect(cells[2]).toBe('"\'=HYPERLINK(""http://x"")"');
-    expect(line).toContain(',0.8,');
+    expect(line).toContain(',80,'); // compression fraction 0.8 written in percent
     expect(recordCsvHeader().split(',').length).toBe(cells.length);
   });
 });
