@@ -1,7 +1,7 @@
 import { memo } from 'react';
 import { Alert, Button, Chip, Paper, Stack, Typography } from '@mui/material';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
-import { useMonitorLink } from '../hooks/use-monitor-link';
+import { type MonitorView, useMonitorLink } from '../hooks/use-monitor-link';
 import { saveLinkUrl } from '../lib/link-url';
 import { CapnogramCanvas } from './capnogram-canvas';
 import { LinkSettings } from './link-settings';
@@ -70,6 +70,7 @@ export const MonitorPanel = memo(function MonitorPanel(props: MonitorPanelProps)
                 {view.gaps === 0 ? 'No gaps' : `${view.gaps} frame(s) missed`}
               </Typography>
             </Stack>
+            <ValueAge view={view} />
             {view.findings.map((f) => (
               <Alert
                 key={f.kind}
@@ -100,6 +101,24 @@ export const MonitorPanel = memo(function MonitorPanel(props: MonitorPanelProps)
     </Paper>
   );
 });
+
+/** How old the newest value is; once stale, the value is shown only as past. */
+function ValueAge({ view }: { view: MonitorView }) {
+  if (view.etco2AgeSec === null) return null;
+  const text =
+    view.staleEtco2MmHg !== null
+      ? `No current value: the last, ${view.staleEtco2MmHg} mmHg, is ${view.etco2AgeSec} s old`
+      : `Last value ${view.etco2AgeSec} s ago`;
+  return (
+    <Typography
+      variant="body2"
+      color={view.staleEtco2MmHg !== null ? 'error' : 'text.secondary'}
+      aria-label="Age of the last value"
+    >
+      {text}
+    </Typography>
+  );
+}
 
 function Reading({ label, value, unit }: { label: string; value: number | null; unit: string }) {
   return (

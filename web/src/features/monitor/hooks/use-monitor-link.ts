@@ -14,6 +14,10 @@ export interface MonitorView {
   samples: number;
   /** Seconds from the arrest of the newest sample. */
   dataSec: number;
+  /** Seconds since the newest breath's value arrived (null before the first). */
+  etco2AgeSec: number | null;
+  /** The newest value once older than `STALE_AFTER_SEC`: shown as past, never as current. */
+  staleEtco2MmHg: number | null;
   findings: Finding[];
 }
 
@@ -25,8 +29,13 @@ const idle: MonitorView = {
   gaps: 0,
   samples: 0,
   dataSec: 0,
+  etco2AgeSec: null,
+  staleEtco2MmHg: null,
   findings: [],
 };
+
+/** A value older than this is never shown as current (the link may be lost). */
+export const STALE_AFTER_SEC = 10;
 /** Findings the panel shows while they last (the waveform's own signs). */
 const panelKinds = new Set(['etco2-rise', 'waveform-absent', 'rebreathing']);
 
@@ -36,6 +45,8 @@ interface Session {
   hello: LinkHello | null;
   store: ChunkAccumulator;
   lastSec: number;
+  /** Wall clock (ms) when the newest breath's value arrived. */
+  breathAtMs: number | null;
 }
 
 /**
@@ -62,9 +73,14 @@ export function useMonitorLink(o: {
     const a = s?.analyzer;
     const breaths = a?.breaths ?? [];
     const last = breaths[breaths.length - 1];
+    const value = last ? Math.round(last.etco2MmHg) : null;
+    const age = s?.breathAtMs != null ? (Date.now() - s.breathAtMs) / 1000 : null;
+    const stale = age !== null && age > STALE_AFTER_SEC;
     setView((v) => ({
       ...v,
-      etco2MmHg: last ? Math.round(last.etco2MmHg) : null,
+      etco2MmHg: stale ? null : value,
+      staleEtco2MmHg: stale ? value : null,
+      etco2AgeSec: age === null ? null : Math.floor(age),
       ratePerMin: breaths.length > 2 ? roundRate(ventilationRate(breaths.slice(-8), 30)) : null,
       gaps: counters.current.gaps,
       samples: counters.current.samples,
@@ -84,6 +100,7 @@ export function useMonitorLink(o: {
       hello: null,
       store,
       lastSec: 0,
+      breathAtMs: null,
     };
     s.client = new MonitorLinkClient(
       url,
@@ -124,6 +141,7 @@ export function useMonitorLink(o: {
     s.lastSec = t0Sec + values.length / h.sampleRateHz;
     endMs.current = t0Ms + (values.length * 1000) / h.sampleRateHz;
     for (const b of a.pushSamples(t0Sec, values)) {
+      s.breathAtMs = Date.now();
       const at = new Date(Date.parse(latest.current.arrestAt) + b.tSec * 1000).toISOString();
       latest.current.onEtco2?.(Math.round(b.etco2MmHg * 10) / 10, at);
     }

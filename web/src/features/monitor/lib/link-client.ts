@@ -1,6 +1,9 @@
 import { type LinkHello, linkMessageSchema } from '@upstroke/contracts';
 import { backoffDelay } from '../../../lib/offline/backoff';
 
+/** Default silence before the link counts as lost (see `LinkClientOptions.silenceMs`). */
+export const LINK_SILENCE_MS = 2000;
+
 export type LinkStatus = 'idle' | 'connecting' | 'live' | 'lost';
 
 export interface LinkHandlers {
@@ -14,7 +17,11 @@ export interface LinkHandlers {
 
 export interface LinkClientOptions {
   createSocket?: (url: string) => WebSocket;
-  /** No frame for this long counts as a lost link (a silent cable, a sleeping bridge). */
+  /**
+   * No frame for this long counts as a lost link (a silent cable, a sleeping bridge).
+   * Frames come about five times a second, so the default of 2 s says "lost" within 3 s of
+   * the last sample.
+   */
   silenceMs?: number;
   delay?: (failures: number) => number;
   /** Samples before this time (ms) are already held: a new client after a reconnect. */
@@ -126,7 +133,10 @@ export class MonitorLinkClient {
 
   private armWatchdog(): void {
     if (this.watchdog) clearTimeout(this.watchdog);
-    this.watchdog = setTimeout(() => this.lost('no data from the link'), this.o.silenceMs ?? 5000);
+    this.watchdog = setTimeout(
+      () => this.lost('no data from the link'),
+      this.o.silenceMs ?? LINK_SILENCE_MS,
+    );
   }
 
   private clearTimers(): void {
