@@ -42,3 +42,4 @@ export { summarize } from './summary.js';
 export * from './debrief/index.js';
 export { arrayToMmHg, DEFAULT_BAROMETRIC_MMHG, MMHG_PER_KPA, mmHgFactor, toMmHg } from './units.js';
 export * from './synth.js';
+export * from './spc/index.js';
