@@ -39,6 +39,9 @@ async function main() {
   const databaseUrl = ensureDatabase({ bin: cluster.bin, port: pgPort, name: 'upstroke_bench' });
   migrateAndSeed(root, databaseUrl);
   buildAll(root);
+  log('── JavaScript per first screen (scripts/bundle-budget.mjs)');
+  const budgetOk =
+    (await runAsync('node', ['scripts/bundle-budget.mjs', '--record'], { cwd: root })) === 0;
   const server = spawn('node', ['api/dist/src/main.js'], {
     cwd: root,
     stdio: ['ignore', 'ignore', 'inherit'],
@@ -79,7 +82,7 @@ async function main() {
   log(
     `benchmarks done (${files.length - failed} ok, ${failed} failed); results in bench/results.json`,
   );
-  return failed === 0;
+  return failed === 0 && budgetOk;
 }
 
 process.on('SIGINT', () => {

@@ -86,6 +86,10 @@ async function main() {
   const built = await step('type-check and build (tsc -b, vite build)', 'node', [
     'scripts/lib/build-cli.mjs',
   ]);
+  if (built)
+    await step('JavaScript budget per first screen (web/dist, gzip)', 'node', [
+      'scripts/bundle-budget.mjs',
+    ]);
   await step(
     'unit tests (vitest: packages, web)',
     'npx',

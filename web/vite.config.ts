@@ -36,7 +36,8 @@ export default defineConfig({
   ],
   resolve: { conditions: ['upstroke-source', 'module', 'browser', 'development|production'] },
   server: { port: 5173, proxy: { '/api': { target: apiTarget, ws: true } } },
-  build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 2500 },
+  // The manifest lets `scripts/bundle-budget.mjs` find what each first screen loads.
+  build: { outDir: 'dist', sourcemap: true, manifest: true, chunkSizeWarningLimit: 2500 },
   test: {
     name: 'web',
     environment: 'jsdom',

@@ -3,16 +3,11 @@ import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router-dom';
 import { AppProvider } from './app/provider';
 import { createRouter } from './app/router';
-import { statusSlot } from './app/status-slot';
-import { StatusArea } from './features/board/components/status-area';
+import { prefetchScreensWhenIdle } from './app/screens';
 import { UpdatePrompt } from './features/board/components/update-prompt';
-import { startSync } from './lib/offline';
 
-// The top bar shows the sync state everywhere, and the outbox drains in the background.
-statusSlot.set(StatusArea);
-startSync();
-
-const router = createRouter();
+const background = import('./background').then((m) => m.startBackground());
+const router = createRouter(background);
 
 createRoot(document.getElementById('root') as HTMLElement).render(
   <StrictMode>
@@ -23,3 +18,5 @@ createRoot(document.getElementById('root') as HTMLElement).render(
     </AppProvider>
   </StrictMode>,
 );
+// Every other screen's code follows once this one is idle, so each opens later offline.
+window.addEventListener('load', prefetchScreensWhenIdle, { once: true });

@@ -1,73 +1,52 @@
+import type { Role } from '@upstroke/contracts';
+import type { ComponentType } from 'react';
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
-import { SetPasswordPage } from '../features/account/components/set-password-page';
-import { AdminPage } from '../features/admin/components/admin-page';
-import { SignInPage } from '../features/auth/components/sign-in-page';
-import { BoardPage } from '../features/board/components/board-page';
-import { DebriefPage } from '../features/debrief/components/debrief-page';
-import { LivePage } from '../features/live/components/live-page';
-import { ReviewQueuePage } from '../features/reviews/components/review-queue-page';
-import { TrendsPage } from '../features/trends/components/trends-page';
-import { Layout } from './layout';
 import { RequireAuth } from './require-auth';
 import { NotFoundPage } from './routes/not-found';
+import { screens } from './screens';
+
+/** A screen loaded on first visit (React Router `lazy`), shown only to the roles named. */
+function guarded(roles: Role[], load: () => Promise<ComponentType>): Pick<RouteObject, 'lazy'> {
+  return {
+    lazy: async () => {
+      const Page = await load();
+      return {
+        element: (
+          <RequireAuth roles={roles}>
+            <Page />
+          </RequireAuth>
+        ),
+      };
+    },
+  };
+}
 
 /** Screens inside the signed-in frame; each names the roles that may open it. */
 export const appRoutes: RouteObject[] = [
-  {
-    index: true,
-    element: (
-      <RequireAuth roles={['recorder', 'lead', 'quality']}>
-        <BoardPage />
-      </RequireAuth>
-    ),
-  },
-  {
-    path: 'live/:id',
-    element: (
-      <RequireAuth roles={['recorder', 'lead']}>
-        <LivePage />
-      </RequireAuth>
-    ),
-  },
-  {
-    path: 'debrief/:id',
-    element: (
-      <RequireAuth roles={['recorder', 'lead', 'quality']}>
-        <DebriefPage />
-      </RequireAuth>
-    ),
-  },
-  {
-    path: 'trends',
-    element: (
-      <RequireAuth roles={['quality', 'admin', 'lead']}>
-        <TrendsPage />
-      </RequireAuth>
-    ),
-  },
-  {
-    path: 'review',
-    element: (
-      <RequireAuth roles={['quality']}>
-        <ReviewQueuePage />
-      </RequireAuth>
-    ),
-  },
-  {
-    path: 'admin/*',
-    element: (
-      <RequireAuth roles={['admin']}>
-        <AdminPage />
-      </RequireAuth>
-    ),
-  },
+  { index: true, ...guarded(['recorder', 'lead', 'quality'], screens.board) },
+  { path: 'live/:id', ...guarded(['recorder', 'lead'], screens.live) },
+  { path: 'debrief/:id', ...guarded(['recorder', 'lead', 'quality'], screens.debrief) },
+  { path: 'trends', ...guarded(['quality', 'admin', 'lead'], screens.trends) },
+  { path: 'review', ...guarded(['quality'], screens.review) },
+  { path: 'admin/*', ...guarded(['admin'], screens.admin) },
   { path: '*', element: <NotFoundPage /> },
 ];
 
-export function createRouter() {
+/**
+ * Every route loads its code on first use. The signed-in frame also waits for `frameReady`
+ * (the tablet's store and sync, started beside the first screen).
+ */
+export function createRouter(frameReady: Promise<unknown> = Promise.resolve()) {
   return createBrowserRouter([
-    { path: '/sign-in', element: <SignInPage /> },
-    { path: '/set-password', element: <SetPasswordPage /> },
-    { path: '/', element: <Layout />, children: appRoutes },
+    { path: '/sign-in', lazy: async () => ({ Component: await screens.signIn() }) },
+    { path: '/set-password', lazy: async () => ({ Component: await screens.setPassword() }) },
+    {
+      path: '/',
+      lazy: async () => {
+        const [{ Layout }] = await Promise.all([import('./layout'), frameReady]);
+        return { Component: Layout };
+      },
+      children: appRoutes,
+    },
   ]);
 }

@@ -1,19 +1,11 @@
 import { Box, Typography } from '@mui/material';
 import { toMmHg } from '@upstroke/capno';
-import {
-  CategoryScale,
-  Chart as ChartJS,
-  LinearScale,
-  LineElement,
-  PointElement,
-  Tooltip,
-} from 'chart.js';
-import annotationPlugin from 'chartjs-plugin-annotation';
-import { memo } from 'react';
-import { Line } from 'react-chartjs-2';
+import { lazy, memo, Suspense } from 'react';
 import type { LocalEtco2 } from '../../../lib/offline';
 
-ChartJS.register(LinearScale, CategoryScale, PointElement, LineElement, Tooltip, annotationPlugin);
+const Etco2TrendChart = lazy(() =>
+  import('./etco2-trend-chart').then((m) => ({ default: m.Etco2TrendChart })),
+);
 
 /** A small trend of recorded EtCO2 over the code, with the site's low band shaded. */
 export const Etco2Trend = memo(function Etco2Trend(props: {
@@ -35,37 +27,14 @@ export const Etco2Trend = memo(function Etco2Trend(props: {
         EtCO2 {last ? `· last ${last.value} ${last.unit}` : '· none yet'}
       </Typography>
       <Box sx={{ height: 140 }}>
-        <Line
-          role="img"
-          aria-label={`EtCO2 trend, ${points.length} values, low band below ${Math.round(props.lowMmHg * scale * 10) / 10} ${props.unit}`}
-          data={{
-            datasets: [
-              { data: points, borderColor: '#c2410c', backgroundColor: '#c2410c', pointRadius: 3 },
-            ],
-          }}
-          options={{
-            animation: false,
-            maintainAspectRatio: false,
-            scales: {
-              x: { type: 'linear', min: 0, title: { display: true, text: 'min' } },
-              y: { min: 0, suggestedMax: 40 * scale },
-            },
-            plugins: {
-              legend: { display: false },
-              annotation: {
-                annotations: {
-                  low: {
-                    type: 'box',
-                    yMin: 0,
-                    yMax: props.lowMmHg * scale,
-                    backgroundColor: 'rgba(179,38,30,0.15)',
-                    borderWidth: 0,
-                  },
-                },
-              },
-            },
-          }}
-        />
+        <Suspense fallback={null}>
+          <Etco2TrendChart
+            points={points}
+            lowMmHg={props.lowMmHg}
+            unit={props.unit}
+            scale={scale}
+          />
+        </Suspense>
       </Box>
     </Box>
   );

@@ -1,0 +1,55 @@
+import {
+  CategoryScale,
+  Chart as ChartJS,
+  LinearScale,
+  LineElement,
+  PointElement,
+  Tooltip,
+} from 'chart.js';
+import annotationPlugin from 'chartjs-plugin-annotation';
+import { Line } from 'react-chartjs-2';
+
+ChartJS.register(LinearScale, CategoryScale, PointElement, LineElement, Tooltip, annotationPlugin);
+
+/** The trend's chart (Chart.js, in its own chunk: Live is usable before it arrives). */
+export function Etco2TrendChart(props: {
+  points: { x: number; y: number }[];
+  lowMmHg: number;
+  unit: 'mmHg' | 'kPa';
+  scale: number;
+}) {
+  const { points, scale } = props;
+  return (
+    <Line
+      role="img"
+      aria-label={`EtCO2 trend, ${points.length} values, low band below ${Math.round(props.lowMmHg * scale * 10) / 10} ${props.unit}`}
+      data={{
+        datasets: [
+          { data: points, borderColor: '#c2410c', backgroundColor: '#c2410c', pointRadius: 3 },
+        ],
+      }}
+      options={{
+        animation: false,
+        maintainAspectRatio: false,
+        scales: {
+          x: { type: 'linear', min: 0, title: { display: true, text: 'min' } },
+          y: { min: 0, suggestedMax: 40 * scale },
+        },
+        plugins: {
+          legend: { display: false },
+          annotation: {
+            annotations: {
+              low: {
+                type: 'box',
+                yMin: 0,
+                yMax: props.lowMmHg * scale,
+                backgroundColor: 'rgba(179,38,30,0.15)',
+                borderWidth: 0,
+              },
+            },
+          },
+        },
+      }}
+    />
+  );
+}
