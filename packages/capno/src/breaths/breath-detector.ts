@@ -66,9 +66,8 @@ export class BreathDetector {
 
   /** Threshold offsets above the baseline; they change only when the amplitude does. */
   private updateDeltas(): void {
-    const o = this.o;
-    this.hiDelta = Math.max(o.minUpstrokeMmHg, o.highFraction * this.amp);
-    this.loDelta = Math.max(0.5 * o.minUpstrokeMmHg, o.lowFraction * this.amp);
+    this.hiDelta = hiDeltaOf(this.o, this.amp);
+    this.loDelta = loDeltaOf(this.o, this.amp);
   }
 
   /** Breaths completed so far (the array grows; callers must not mutate it). */
@@ -98,105 +97,106 @@ export class BreathDetector {
   /** Feeds samples already in mmHg (or in any unit times `scale`); returns new breaths. */
   push(values: ArrayLike<number>, scale = 1): DetectedBreath[] {
     const before = this.out.length;
-    for (let k = 0; k < values.length; k++) this.step(values[k] * scale);
+    // The state lives in locals while the loop runs (it runs for every sample: fields cost
+    // a load and a store each) and is stored back at the end, so chunks still join seamlessly.
+    const { o, hist, smoothBuf: sb, smoothN, holdN, decay, minExN, minInN, maxRiseN } = this;
+    let { n, histPos, smoothPos, smoothSum, sinceBreathN, state, base, amp } = this;
+    let { hiDelta, loDelta, lowIdx, riseIdx, fallIdx, lastHighIdx, fallMin, breathBase } = this;
+    for (let k = 0; k < values.length; k++) {
+      const x = values[k] * scale;
+      const i = n++;
+      hist[histPos] = x;
+      if (++histPos === hist.length) histPos = 0; // wrapping, not modulo
+      smoothSum += x - sb[smoothPos];
+      sb[smoothPos] = x;
+      if (++smoothPos === smoothN) smoothPos = 0;
+      const xs = smoothSum / (i < smoothN ? i + 1 : smoothN);
+      if (++sinceBreathN > holdN && amp > 0) {
+        amp = amp < 1e-3 ? 0 : amp * decay; // no denormals in long gaps
+        hiDelta = hiDeltaOf(o, amp);
+        loDelta = loDeltaOf(o, amp);
+      }
+      const hi = base + hiDelta;
+      const lo = base + loDelta;
+      if (state === IN) {
+        if (xs < base) base = xs;
+        if (xs <= lo) lowIdx = i;
+        else if (xs <= hi) continue;
+        else if (i - lowIdx > maxRiseN) {
+          // Too slow for an upstroke: a drift of the baseline (e.g. rebreathing), so follow it.
+          base = xs;
+          lowIdx = i;
+        } else {
+          state = RISING;
+          riseIdx = lastHighIdx = i;
+          breathBase = base;
+        }
+      } else if (state === RISING) {
+        if (xs < lo) state = IN;
+        else if (i - riseIdx >= minExN) state = EX;
+        if (xs >= hi) lastHighIdx = i;
+      } else if (xs >= hi) {
+        // On the plateau, or a short dip inside it (compression artefact): the same breath.
+        state = EX;
+        lastHighIdx = i;
+      } else if (state === EX) {
+        if (xs < lo) {
+          state = FALLING;
+          fallIdx = i;
+          fallMin = xs;
+        }
+      } else {
+        if (xs < fallMin) fallMin = xs;
+        if (i - fallIdx < minInN) continue;
+        const etco2 = this.emit(n, histPos, riseIdx, lastHighIdx, fallIdx, breathBase);
+        amp = amp === 0 ? etco2 - breathBase : 0.6 * amp + 0.4 * (etco2 - breathBase);
+        hiDelta = hiDeltaOf(o, amp);
+        loDelta = loDeltaOf(o, amp);
+        sinceBreathN = 0;
+        state = IN;
+        base = fallMin;
+        lowIdx = i;
+      }
+    }
+    Object.assign(this, { n, histPos, smoothPos, smoothSum, sinceBreathN, state, base, amp });
+    Object.assign(this, { hiDelta, loDelta, lowIdx, riseIdx, fallIdx, lastHighIdx, fallMin });
+    this.breathBase = breathBase;
     return this.out.slice(before);
   }
 
-  private step(x: number): void {
-    // Ring positions advance by wrapping, not modulo: this loop runs for every sample.
-    const i = this.n++;
-    this.hist[this.histPos] = x;
-    if (++this.histPos === this.hist.length) this.histPos = 0;
-    const sb = this.smoothBuf;
-    this.smoothSum += x - sb[this.smoothPos];
-    sb[this.smoothPos] = x;
-    if (++this.smoothPos === this.smoothN) this.smoothPos = 0;
-    const xs = this.smoothSum / (i < this.smoothN ? i + 1 : this.smoothN);
-    if (++this.sinceBreathN > this.holdN && this.amp > 0) {
-      this.amp = this.amp < 1e-3 ? 0 : this.amp * this.decay; // no denormals in long gaps
-      this.updateDeltas();
-    }
-    const hi = this.base + this.hiDelta;
-    const lo = this.base + this.loDelta;
-    switch (this.state) {
-      case IN:
-        return this.stepIn(i, xs, hi, lo);
-      case RISING:
-        if (xs < lo) this.state = IN;
-        else if (i - this.riseIdx >= this.minExN) this.state = EX;
-        if (xs >= hi) this.lastHighIdx = i;
-        return;
-      case EX:
-        if (xs >= hi) this.lastHighIdx = i;
-        else if (xs < lo) this.beginFall(i, xs);
-        return;
-      default:
-        return this.stepFalling(i, xs, hi);
-    }
-  }
-
-  private stepIn(i: number, xs: number, hi: number, lo: number): void {
-    if (xs < this.base) this.base = xs;
-    if (xs <= lo) {
-      this.lowIdx = i;
-      return;
-    }
-    if (xs <= hi) return;
-    if (i - this.lowIdx > this.maxRiseN) {
-      // Too slow for an upstroke: a drift of the baseline (e.g. rebreathing), so follow it.
-      this.base = xs;
-      this.lowIdx = i;
-      return;
-    }
-    this.state = RISING;
-    this.riseIdx = i;
-    this.lastHighIdx = i;
-    this.breathBase = this.base;
-  }
-
-  private beginFall(i: number, xs: number): void {
-    this.state = FALLING;
-    this.fallIdx = i;
-    this.fallMin = xs;
-  }
-
-  private stepFalling(i: number, xs: number, hi: number): void {
-    if (xs >= hi) {
-      this.state = EX; // a short dip inside the plateau (compression artefact): same breath
-      this.lastHighIdx = i;
-      return;
-    }
-    if (xs < this.fallMin) this.fallMin = xs;
-    if (i - this.fallIdx < this.minInN) return;
-    this.emit();
-    this.state = IN;
-    this.base = this.fallMin;
-    this.lowIdx = i;
-  }
-
-  private emit(): void {
+  /** Records the breath that just ended; returns its EtCO2 (the mean of its plateau). */
+  private emit(
+    n: number,
+    histPos: number,
+    riseIdx: number,
+    lastHighIdx: number,
+    fallIdx: number,
+    breathBase: number,
+  ): number {
     const fs = this.sampleRateHz;
     const hist = this.hist;
     const len = hist.length;
-    const oldest = Math.max(this.riseIdx, this.n - len);
-    const end = Math.max(oldest, this.lastHighIdx - Math.round(this.o.plateauGuardSec * fs));
+    const oldest = Math.max(riseIdx, n - len);
+    const end = Math.max(oldest, lastHighIdx - Math.round(this.o.plateauGuardSec * fs));
     const start = Math.max(oldest, end - Math.max(1, Math.round(this.o.plateauWindowSec * fs)));
     let sum = 0;
     // Sample index k sits (n − k) places behind the write position of the ring.
-    for (let k = start; k <= end; k++) sum += hist[(this.histPos - (this.n - k) + 2 * len) % len];
+    for (let k = start; k <= end; k++) sum += hist[(histPos - (n - k) + 2 * len) % len];
     const etco2 = sum / (end - start + 1);
-    const amplitude = etco2 - this.breathBase;
-    this.amp = this.amp === 0 ? amplitude : 0.6 * this.amp + 0.4 * amplitude;
-    this.updateDeltas();
-    this.sinceBreathN = 0;
     this.out.push({
-      tSec: this.segT0 + this.riseIdx / fs,
+      tSec: this.segT0 + riseIdx / fs,
       etco2MmHg: etco2,
-      baselineMmHg: Math.max(0, this.breathBase),
-      durationSec: (this.fallIdx - this.riseIdx) / fs,
+      baselineMmHg: Math.max(0, breathBase),
+      durationSec: (fallIdx - riseIdx) / fs,
     });
+    return etco2;
   }
 }
+
+const hiDeltaOf = (o: DetectorOptions, amp: number) =>
+  Math.max(o.minUpstrokeMmHg, o.highFraction * amp);
+const loDeltaOf = (o: DetectorOptions, amp: number) =>
+  Math.max(0.5 * o.minUpstrokeMmHg, o.lowFraction * amp);
 
 /**
  * Detects breaths in a whole capnogram (values in mmHg, or any unit times `scale`).
