@@ -37,7 +37,8 @@ export function rhythmName(r: string | null | undefined): string {
 
 export function drugName(data: Record<string, unknown>): string {
   const d = String(data.drug ?? 'other');
-  return d === 'other' && typeof data.name === 'string' ? data.name : labelOf(drugLabels, d);
+  // A named preparation ("Calcium chloride 10 %") is shown by its name.
+  return typeof data.name === 'string' && data.name ? data.name : labelOf(drugLabels, d);
 }
 
 function str(v: unknown): string {

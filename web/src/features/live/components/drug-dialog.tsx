@@ -1,24 +1,31 @@
-import { ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import { ToggleButton, ToggleButtonGroup } from '@mui/material';
 import type { EventData, Thresholds } from '@upstroke/contracts';
 import { useState } from 'react';
-import { ChoiceDialog } from './choice-dialog';
-import { drugPresets } from './drug-presets';
+import { DoseChoiceDialog, type OnWeight, type Patient } from './dose-choice-dialog';
+import { adultDrugPresets, type DrugPreset, paediatricDrugPresets } from './drug-presets';
+
+const asChoices = (presets: DrugPreset[]) =>
+  presets.map((p) => ({ label: p.label, value: p.data, hint: p.hint }));
 
 export function DrugDialog(props: {
   open: boolean;
-  weightKg?: number;
+  patient: Patient;
   thresholds: Thresholds;
   onDrug: (data: EventData<'drug'>) => void;
+  onWeight: OnWeight;
   onClose: () => void;
 }) {
   const [route, setRoute] = useState<'iv' | 'io'>('iv');
-  const presets = drugPresets(route, props.thresholds, props.weightKg);
   return (
-    <ChoiceDialog
+    <DoseChoiceDialog
       open={props.open}
       title="Drug given"
-      choices={presets.map((p) => ({ label: p.label, value: p.data, hint: p.hint }))}
+      patient={props.patient}
+      weightChoices={(kg) => asChoices(paediatricDrugPresets(route, props.thresholds, kg))}
+      adultChoices={asChoices(adultDrugPresets(route))}
+      adultLabel="Adult doses"
       onPick={props.onDrug}
+      onWeight={props.onWeight}
       onClose={props.onClose}
     >
       <ToggleButtonGroup
@@ -34,11 +41,6 @@ export function DrugDialog(props: {
           IO
         </ToggleButton>
       </ToggleButtonGroup>
-      {props.weightKg && (
-        <Typography variant="body2" sx={{ mt: 1 }}>
-          Child: weight-based doses from the site profile, shown with the arithmetic.
-        </Typography>
-      )}
-    </ChoiceDialog>
+    </DoseChoiceDialog>
   );
 }

@@ -7,6 +7,7 @@ import {
 } from '@upstroke/contracts';
 import { AirwayDialog } from './airway-dialog';
 import { ChoiceDialog } from './choice-dialog';
+import type { OnWeight, Patient } from './dose-choice-dialog';
 import { DrugDialog } from './drug-dialog';
 import { Etco2Keypad } from './etco2-keypad';
 import { NoteDialog } from './note-dialog';
@@ -40,7 +41,9 @@ export const LiveDialogs = memo(function LiveDialogs(props: {
   onEnd: (reason: EndReason) => void;
   thresholds: Thresholds;
   etco2Unit: 'mmHg' | 'kPa';
-  weightKg?: number;
+  /** Age group and weight: child and infant records get weight-based choices only. */
+  patient: Patient;
+  onWeight: OnWeight;
   shocksGiven: number;
 }) {
   const { open, onClose, record } = props;
@@ -54,17 +57,19 @@ export const LiveDialogs = memo(function LiveDialogs(props: {
     <>
       <ShockDialog
         open={open === 'shock'}
-        weightKg={props.weightKg}
+        patient={props.patient}
         thresholds={props.thresholds}
         shocksGiven={props.shocksGiven}
+        onWeight={props.onWeight}
         onShock={(energyJ) => done('shock')({ energyJ })}
         onClose={onClose}
       />
       <DrugDialog
         open={open === 'drug'}
-        weightKg={props.weightKg}
+        patient={props.patient}
         thresholds={props.thresholds}
         onDrug={done('drug')}
+        onWeight={props.onWeight}
         onClose={onClose}
       />
       <AirwayDialog

@@ -9,6 +9,7 @@ import { MonitorPanel } from '../../monitor/components/monitor-panel';
 import { useArrestTime } from '../hooks/use-arrest-time';
 import { useLiveActions } from '../hooks/use-live-actions';
 import { type useLiveRecord, useSiteSettings } from '../hooks/use-live-record';
+import { useSaveWeight } from '../hooks/use-save-weight';
 import { useNow } from '../hooks/use-now';
 import { usePrompts } from '../hooks/use-prompts';
 import { startArrest } from '../lib/arrest-time';
@@ -61,7 +62,11 @@ export function LiveScreen({
   const setArrest = useArrestTime(record.id, record.arrestAt, events);
   const { undo: undoEntry } = actions;
   const undo = useCallback(() => setUndid(undoEntry()), [undoEntry]);
-  const childWeight = record.ageGroup !== 'adult' ? record.weightKg : undefined;
+  const patient = useMemo(
+    () => ({ ageGroup: record.ageGroup, weightKg: record.weightKg }),
+    [record.ageGroup, record.weightKg],
+  );
+  const onWeight = useSaveWeight(record.id, actions.record);
   return (
     <Stack spacing={1.5}>
       <LiveHeader
@@ -131,7 +136,8 @@ export function LiveScreen({
         onEnd={actions.end}
         thresholds={thresholds}
         etco2Unit={etco2Unit}
-        weightKg={childWeight}
+        patient={patient}
+        onWeight={onWeight}
         shocksGiven={state.shocks}
       />
       {dialog === 'details' && <DetailsDialog open record={record} onClose={close} />}

@@ -1,37 +1,40 @@
-import { Typography } from '@mui/material';
 import type { Thresholds } from '@upstroke/contracts';
-import { paediatricShock } from '../lib/paediatric';
-import { ChoiceDialog, type Choice } from './choice-dialog';
+import { paediatricShocks } from '../lib/paediatric';
+import type { Choice } from './choice-dialog';
+import { DoseChoiceDialog, type OnWeight, type Patient } from './dose-choice-dialog';
 
 /** Common adult biphasic settings (common practice; the device's own range applies). */
-const adultEnergies = [120, 150, 200, 300, 360];
+const adultEnergies: Choice<number>[] = [120, 150, 200, 300, 360].map((j) => ({
+  label: `${j} J`,
+  value: j,
+}));
 
 export function ShockDialog(props: {
   open: boolean;
-  weightKg?: number;
+  patient: Patient;
   thresholds: Thresholds;
   shocksGiven: number;
   onShock: (energyJ: number) => void;
+  onWeight: OnWeight;
   onClose: () => void;
 }) {
-  const child = props.weightKg
-    ? paediatricShock(props.thresholds, props.weightKg, props.shocksGiven)
-    : null;
-  const choices: Choice<number>[] = adultEnergies.map((j) => ({ label: `${j} J`, value: j }));
-  if (child) choices.unshift({ label: `${child.value} J`, value: child.value, hint: 'per kg' });
+  const weightChoices = (kg: number): Choice<number>[] =>
+    paediatricShocks(props.thresholds, kg, props.shocksGiven).map((d) => ({
+      label: `${d.value} J`,
+      value: d.value,
+      hint: d.working,
+    }));
   return (
-    <ChoiceDialog
+    <DoseChoiceDialog
       open={props.open}
       title="Shock: energy"
-      choices={choices}
+      patient={props.patient}
+      weightChoices={weightChoices}
+      adultChoices={adultEnergies}
+      adultLabel="Adult energies"
       onPick={props.onShock}
+      onWeight={props.onWeight}
       onClose={props.onClose}
-    >
-      {child && (
-        <Typography aria-label="Weight-based energy">
-          Child ({props.weightKg} kg): {child.working} (site profile)
-        </Typography>
-      )}
-    </ChoiceDialog>
+    />
   );
 }
