@@ -1,6 +1,8 @@
 // `npm start`: everything from a clean clone to the app on http://localhost:8080.
 // Uses Node built-ins only until the npm packages are installed.
 import { spawn } from 'node:child_process';
+import crypto from 'node:crypto';
+import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { buildAll, migrateAndSeed } from './lib/build.mjs';
@@ -24,6 +26,21 @@ function stopAll(code) {
     }
   }
   process.exit(code);
+}
+
+/**
+ * The token-signing secret: JWT_SECRET, or one generated on the first start and kept in
+ * .local/jwt-secret (readable by this user only), so a restart keeps tablets signed in.
+ */
+function jwtSecret() {
+  if (process.env.JWT_SECRET) return process.env.JWT_SECRET;
+  const file = path.join(root, '.local', 'jwt-secret');
+  if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim();
+  fs.mkdirSync(path.dirname(file), { recursive: true });
+  const secret = crypto.randomBytes(32).toString('hex');
+  fs.writeFileSync(file, `${secret}\n`, { mode: 0o600 });
+  log('generated a token-signing secret in .local/jwt-secret');
+  return secret;
 }
 
 function main() {
@@ -53,6 +70,7 @@ function main() {
       NODE_ENV: process.env.NODE_ENV ?? 'production',
       PORT: String(port),
       DATABASE_URL: databaseUrl,
+      JWT_SECRET: jwtSecret(),
       SMTP_SINK_PORT: String(smtpPort),
       SMTP_HOST: process.env.SMTP_HOST ?? '127.0.0.1',
       SMTP_PORT: process.env.SMTP_PORT ?? String(smtpPort),

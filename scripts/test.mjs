@@ -126,6 +126,7 @@ async function main() {
       PUBLIC_URL: `http://localhost:${app}`,
       JWT_SECRET: 'e2e-secret',
       LOGIN_LIMIT_PER_MINUTE: '200',
+      LOGIN_IP_LIMIT_PER_MINUTE: '1000',
     }));
     cleanups.push(server.stop);
     const { port: appPort, smtpPort } = server;

@@ -39,7 +39,7 @@ export async function createApp(config: AppConfig): Promise<INestApplication> {
     cors: false,
   });
   app.useLogger(app.get(Logger));
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', config.trustProxy);
   app.useBodyParser('json', { limit: '20mb' });
   app.use(
     helmet({

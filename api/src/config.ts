@@ -6,7 +6,12 @@ export interface AppConfig {
   databaseUrl: string;
   jwtSecret: string;
   jwtExpiresInSec: number;
+  /** Sign-in attempts per minute for one e-mail, from any address. */
   loginLimitPerMinute: number;
+  /** Sign-in attempts per minute from one address, for any e-mails. */
+  loginIpLimitPerMinute: number;
+  /** Express `trust proxy`: false unless TRUST_PROXY names the proxies (e.g. `loopback`). */
+  trustProxy: string | false;
   webDist: string | null;
   publicUrl: string;
   smtp: { host: string; port: number; from: string };
@@ -32,6 +37,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     jwtSecret: env.JWT_SECRET ?? crypto.randomBytes(32).toString('hex'),
     jwtExpiresInSec: Number(env.JWT_EXPIRES_IN_SEC ?? 12 * 3600),
     loginLimitPerMinute: Number(env.LOGIN_LIMIT_PER_MINUTE ?? 5),
+    loginIpLimitPerMinute: Number(env.LOGIN_IP_LIMIT_PER_MINUTE ?? 30),
+    // X-Forwarded-For is believed only from proxies named here; by default from nobody.
+    trustProxy: env.TRUST_PROXY ? env.TRUST_PROXY : false,
     webDist: env.WEB_DIST ?? null,
     publicUrl: env.PUBLIC_URL ?? `http://localhost:${port}`,
     smtp: {

@@ -43,6 +43,7 @@ export async function startTestApp(overrides: Partial<AppConfig> = {}): Promise<
     ...loadConfig(),
     jwtSecret: 'test-secret',
     loginLimitPerMinute: 1000,
+    loginIpLimitPerMinute: 1000,
     ...overrides,
   };
   const app = await createApp(config);

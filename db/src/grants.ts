@@ -28,6 +28,7 @@ export const tableGrants: Record<string, { privileges: Privilege[]; updateColumn
   record_reviews: { privileges: ['select', 'insert'] },
   mail_outbox: { privileges: ['select', 'insert', 'update'] },
   mail_sink_messages: { privileges: ['select', 'insert'] },
+  sign_in_attempts: { privileges: ['select', 'insert', 'delete'] },
   knex_migrations: { privileges: [] },
   knex_migrations_lock: { privileges: [] },
 };

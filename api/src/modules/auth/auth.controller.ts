@@ -1,11 +1,10 @@
 import { Body, Controller, Get, HttpCode, Post, UseGuards } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import { Throttle } from '@nestjs/throttler';
 import { type LoginRequest, loginRequestSchema, type LoginResponse } from '@upstroke/contracts';
 import { type AuthUser, CurrentUser, Public, Roles } from '../../common/auth.decorators';
 import { ZodPipe } from '../../common/zod.pipe';
 import { AuthService } from './auth.service';
-import { LoginThrottlerGuard } from './login-throttler.guard';
+import { SignInThrottleGuard } from '../sign-in-throttle/sign-in-throttle.guard';
 
 @ApiTags('auth')
 @Controller('auth')
@@ -13,8 +12,7 @@ export class AuthController {
   constructor(private readonly auth: AuthService) {}
 
   @Public()
-  @UseGuards(LoginThrottlerGuard)
-  @Throttle({ login: {} })
+  @UseGuards(SignInThrottleGuard)
   @Post('login')
   @HttpCode(200)
   login(@Body(new ZodPipe(loginRequestSchema)) body: LoginRequest): Promise<LoginResponse> {

@@ -1,8 +1,8 @@
 import { Module } from '@nestjs/common';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
-import { ThrottlerModule } from '@nestjs/throttler';
 import { APP_CONFIG, type AppConfig } from '../../config';
+import { SignInThrottleModule } from '../sign-in-throttle/sign-in-throttle.module';
 import { UsersModule } from '../users/users.module';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
@@ -19,12 +19,7 @@ import { JwtStrategy } from './jwt.strategy';
         signOptions: { expiresIn: config.jwtExpiresInSec },
       }),
     }),
-    ThrottlerModule.forRootAsync({
-      inject: [APP_CONFIG],
-      useFactory: (config: AppConfig) => [
-        { name: 'login', ttl: 60_000, limit: config.loginLimitPerMinute },
-      ],
-    }),
+    SignInThrottleModule,
   ],
   controllers: [AuthController],
   providers: [AuthService, JwtStrategy],

@@ -10,7 +10,9 @@ import {
 import { FileInterceptor } from '@nestjs/platform-express';
 import { IMPORT_MAX_BYTES } from '@upstroke/contracts';
 import { EMPTY, finalize, type Observable } from 'rxjs';
-import { DomainError } from '../../common/errors';
+import type { AuthUser } from '../../common/auth.decorators';
+import { badRequest, DomainError } from '../../common/errors';
+import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
 
 const MultipartFile = FileInterceptor('file', {
   // On disk, not in memory: a 50 MB file must not cost 50 MB of heap per upload.
@@ -18,15 +20,25 @@ const MultipartFile = FileInterceptor('file', {
   limits: { fileSize: IMPORT_MAX_BYTES, files: 1, fields: 10, parts: 12 },
 });
 
+const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
 /**
- * Receives the `file` part to a temporary file, names the size limit when it is exceeded,
- * and removes the temporary file once the request is answered.
+ * Checks that the caller may write to the record before reading a byte of the body (the
+ * token and role were checked by the guards), then receives the `file` part to a temporary
+ * file, names the size limit when it is exceeded, and removes the temporary file once the
+ * request is answered.
  */
 @Injectable()
 export class ImportUploadInterceptor implements NestInterceptor {
   private readonly multipart = new MultipartFile();
 
+  constructor(private readonly access: ResuscitationAccess) {}
+
   async intercept(ctx: ExecutionContext, next: CallHandler): Promise<Observable<unknown>> {
+    const req = ctx.switchToHttp().getRequest<{ user: AuthUser; params: { id?: string } }>();
+    const id = req.params.id ?? '';
+    if (!uuidPattern.test(id)) throw badRequest('id: not a valid id');
+    await this.access.writable(req.user, id);
     try {
       await this.multipart.intercept(ctx, { handle: () => EMPTY });
     } catch (e) {

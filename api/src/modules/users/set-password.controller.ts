@@ -1,10 +1,9 @@
 import { Body, Controller, Headers, HttpCode, Post, UseGuards } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { Throttle } from '@nestjs/throttler';
 import { type SetPassword, setPasswordSchema } from '@upstroke/contracts';
 import { Public } from '../../common/auth.decorators';
 import { ZodPipe } from '../../common/zod.pipe';
-import { LoginThrottlerGuard } from '../auth/login-throttler.guard';
+import { SignInThrottleGuard } from '../sign-in-throttle/sign-in-throttle.guard';
 import { InvitationsService } from './invitations.service';
 
 /** The public end of an invitation or reset link. */
@@ -14,8 +13,7 @@ export class SetPasswordController {
   constructor(private readonly invitations: InvitationsService) {}
 
   @Public()
-  @UseGuards(LoginThrottlerGuard)
-  @Throttle({ login: {} })
+  @UseGuards(SignInThrottleGuard)
   @Post('set-password')
   @HttpCode(200)
   setPassword(

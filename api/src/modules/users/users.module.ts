@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { AdminScopeModule } from '../admin-scope/admin-scope.module';
+import { SignInThrottleModule } from '../sign-in-throttle/sign-in-throttle.module';
 import { InvitationsRepository } from './invitations.repository';
 import { InvitationsService } from './invitations.service';
 import { SetPasswordController } from './set-password.controller';
@@ -8,7 +9,7 @@ import { UsersRepository } from './users.repository';
 import { UsersService } from './users.service';
 
 @Module({
-  imports: [AdminScopeModule],
+  imports: [AdminScopeModule, SignInThrottleModule],
   controllers: [UsersController, SetPasswordController],
   providers: [UsersRepository, InvitationsRepository, InvitationsService, UsersService],
   exports: [UsersRepository],
