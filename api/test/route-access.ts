@@ -21,6 +21,7 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'POST /api/resuscitations/{id}/events/batch': clinical,
   'POST /api/resuscitations/{id}/etco2/batch': clinical,
   'POST /api/resuscitations/{id}/waveform/batch': clinical,
+  'POST /api/resuscitations/{id}/discards': ['lead'],
   'GET /api/resuscitations/{id}/debrief': readers,
   'POST /api/resuscitations/{id}/sign': ['lead'],
   'POST /api/resuscitations/{id}/amendments': ['lead'],

@@ -14,3 +14,4 @@ export * from './plausibility.js';
 export * from './live-feed.js';
 export * from './labels.js';
 export * from './formats.js';
+export * from './discards.js';

@@ -15,6 +15,9 @@ import {
   type BatchResult,
   type CreateResuscitation,
   createResuscitationSchema,
+  type DiscardRefused,
+  discardRefusedSchema,
+  type DiscardResult,
   entriesQuerySchema,
   listResuscitationsQuerySchema,
   type PatchResuscitation,
@@ -134,5 +137,15 @@ export class ResuscitationsController {
     @Headers('x-clock-offset-ms') offset?: string,
   ): Promise<BatchResult> {
     return this.sync.waveform(user, id, body.chunks, syncContext(deviceId, offset));
+  }
+
+  @Roles('lead')
+  @Post(':id/discards')
+  discard(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuid) id: string,
+    @Body(new ZodPipe(discardRefusedSchema)) body: DiscardRefused,
+  ): Promise<DiscardResult> {
+    return this.sync.discard(user, id, body);
   }
 }

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import type { BatchResult } from '@upstroke/contracts';
+import type { BatchResult, DiscardRefused, DiscardResult } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { AuditRepository } from '../audit/audit.repository';
 import { ClinicalDataRepository } from './clinical-data.repository';
@@ -42,6 +42,22 @@ export class SyncService {
 
   waveform(user: AuthUser, id: string, items: unknown[], ctx: SyncContext): Promise<BatchResult> {
     return this.ingest(user, id, items, ctx, 'waveformChunks', waveformRow);
+  }
+
+  /**
+   * A lead gives up on entries the server refused: nothing is stored or deleted, the audit
+   * log keeps who discarded what and why (the tablet keeps the entries, marked discarded).
+   */
+  async discard(user: AuthUser, id: string, body: DiscardRefused): Promise<DiscardResult> {
+    await this.access.readable(user, id);
+    await this.audit.insert({
+      userId: user.id,
+      action: 'discard-refused',
+      entity: 'syncItems',
+      resuscitationId: id,
+      details: { reason: body.reason, items: body.items },
+    });
+    return { discarded: body.items.length };
   }
 
   private async ingest(

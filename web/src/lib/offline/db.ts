@@ -8,8 +8,11 @@ import type {
 } from '@upstroke/contracts';
 import Dexie, { type EntityTable } from 'dexie';
 
-/** 0 waiting for the server, 1 acknowledged, 2 refused by the server (kept, never deleted). */
-export type SyncFlag = 0 | 1 | 2;
+/**
+ * 0 waiting for the server, 1 acknowledged, 2 refused by the server, 3 refused and then
+ * discarded by a lead with a reason (all kept, never deleted).
+ */
+export type SyncFlag = 0 | 1 | 2 | 3;
 
 /**
  * The server's answer for one event, value or chunk. Kept apart from the items so that the
@@ -18,9 +21,11 @@ export type SyncFlag = 0 | 1 | 2;
 export interface SyncAck {
   id: string;
   resuscitationId: string;
-  state: 1 | 2;
-  /** Why the server refused it (state 2); the item stays on the tablet. */
+  state: 1 | 2 | 3;
+  /** Why the server refused it (states 2, 3); the item stays on the tablet. */
   reason?: string;
+  /** Why a lead discarded it (state 3); the server's audit log has the same. */
+  discardReason?: string;
 }
 
 export interface LocalResuscitation {

@@ -1,4 +1,4 @@
-import type { BatchResult, RecordingContext } from '@upstroke/contracts';
+import type { BatchResult, DiscardRefused, RecordingContext } from '@upstroke/contracts';
 import { ApiRequestError } from '../api-client';
 import type { BatchKind, SyncTransport } from './transport';
 
@@ -18,7 +18,14 @@ export class FakeServer implements SyncTransport {
   /** Scripted failures for the next batch calls: 'before' or 'after' storing. */
   failures: ('before' | 'after' | null)[] = [];
   refuseIds = new Set<string>();
+  /** A batch holding one of these answers 500 whole (an item that crashes the server). */
+  poisonIds = new Set<string>();
+  /** A batch holding one of these answers 400 whole, naming the item by its index. */
+  namedRefusalIds = new Set<string>();
+  /** Beyond this |clock offset| every batch answers 400 naming the header (as the API). */
+  clockLimitMs = Infinity;
   clockSkewMs = 0;
+  readonly discards: { id: string; body: DiscardRefused }[] = [];
 
   async context(): Promise<RecordingContext> {
     return { serverTime: new Date(Date.now() - this.clockSkewMs).toISOString(), sites: [] };
@@ -40,6 +47,7 @@ export class FakeServer implements SyncTransport {
     const failure = this.failures.shift() ?? null;
     if (failure === 'before') throw new TypeError('Failed to fetch');
     if (!this.records.has(id)) throw new ApiRequestError(404, null);
+    this.refuseWhole(items as { id: string }[], kind, offset);
     const result: BatchResult = { accepted: 0, duplicates: 0, rejected: [] };
     for (const item of items as { id: string }[]) {
       if (this.refuseIds.has(item.id)) result.rejected.push({ id: item.id, reason: 'value: bad' });
@@ -51,5 +59,25 @@ export class FakeServer implements SyncTransport {
     }
     if (failure === 'after') throw new TypeError('Failed to fetch');
     return result;
+  }
+
+  async discard(id: string, body: DiscardRefused): Promise<void> {
+    this.discards.push({ id, body });
+  }
+
+  private refuseWhole(items: { id: string }[], kind: BatchKind, offset?: number) {
+    const fail = (status: number, path: string, message: string) =>
+      new ApiRequestError(status, {
+        statusCode: status,
+        error: 'Error',
+        message: `${path}: ${message}`,
+        details: [{ path, message }],
+      });
+    if (offset !== undefined && Math.abs(offset) > this.clockLimitMs)
+      throw fail(400, 'X-Clock-Offset-Ms', "check the tablet's date and time");
+    if (items.some((i) => this.poisonIds.has(i.id))) throw fail(500, '(body)', 'crashed');
+    const named = items.findIndex((i) => this.namedRefusalIds.has(i.id));
+    const key = { events: 'events', etco2: 'samples', waveform: 'chunks' }[kind];
+    if (named >= 0) throw fail(400, `${key}.${named}.data`, 'not storable');
   }
 }

@@ -21,7 +21,9 @@ export { startSync, syncEngine } from './engine-instance';
 export { type LocalRecord, storedFromLocal } from './stored-record';
 export { useSyncState, type SyncState } from './use-sync-state';
 export { useRemoteEntries } from './use-remote-entries';
+export { apiTransport } from './transport';
 export {
+  discardRefused,
   listSyncProblems,
   retrySyncProblems,
   type RefusedItem,

@@ -1,4 +1,5 @@
 import type { LocalEtco2, LocalEvent, LocalWaveformChunk, OfflineDb, SyncAck } from './db';
+import { deliver, type Delivery, messageOf } from './send-batch';
 import { type BatchKind, isPermanent, type SyncTransport } from './transport';
 
 type Row = LocalEvent | LocalEtco2 | LocalWaveformChunk;
@@ -30,10 +31,6 @@ async function waitingItems(db: OfflineDb, kind: BatchKind, acked: Set<string>):
   return (await table.bulkGet(keys)).filter((r): r is LocalEvent => r !== undefined);
 }
 
-function messageOf(error: unknown): string {
-  return error instanceof Error ? error.message : String(error);
-}
-
 /**
  * Record-level operations in the order they were made. A transient failure stops the drain
  * (so a patch never overtakes its create); a permanent refusal is kept with its reason.
@@ -59,42 +56,56 @@ async function sendOps(db: OfflineDb, transport: SyncTransport): Promise<Set<str
   return blocked;
 }
 
+function byRecordOf(rows: Row[]): Map<string, Row[]> {
+  const byRecord = new Map<string, Row[]>();
+  for (const r of rows) {
+    const list = byRecord.get(r.resuscitationId);
+    if (list) list.push(r);
+    else byRecord.set(r.resuscitationId, [r]);
+  }
+  return byRecord;
+}
+
+interface SendOptions {
+  clockOffsetMs?: number;
+  /** Split batches that fail with 5xx (set after repeated failed drains). */
+  bisect?: boolean;
+}
+
+/**
+ * Sends the waiting items of one kind in batches. Items the server answered are stored in
+ * `acks`; a 5xx leaves items waiting: when a whole batch failed, the drain stops there;
+ * when only some (a poison item found by bisection), the others go on and the 5xx is
+ * returned, to be thrown once everything else was sent (so the engine backs off).
+ */
 async function sendItems(
   db: OfflineDb,
   transport: SyncTransport,
   kind: BatchKind,
   blocked: Set<string>,
   acked: Set<string>,
-  clockOffsetMs: number | undefined,
-): Promise<DrainResult> {
-  const waiting = await waitingItems(db, kind, acked);
-  const result: DrainResult = { sent: 0, refused: 0 };
-  const byRecord = new Map<string, Row[]>();
-  for (const r of waiting) {
-    const list = byRecord.get(r.resuscitationId);
-    if (list) list.push(r);
-    else byRecord.set(r.resuscitationId, [r]);
-  }
-  for (const [recordId, rows] of byRecord) {
+  o: SendOptions,
+): Promise<DrainResult & { serverError: unknown }> {
+  const result = { sent: 0, refused: 0, serverError: null as unknown };
+  for (const [recordId, rows] of byRecordOf(await waitingItems(db, kind, acked))) {
     if (blocked.has(recordId)) continue;
     for (let i = 0; i < rows.length; i += BATCH_SIZE) {
       const chunk = rows.slice(i, i + BATCH_SIZE);
-      let refused: Map<string, string>;
-      try {
-        const res = await transport.batch(recordId, kind, chunk.map(wire), clockOffsetMs);
-        refused = new Map(res.rejected.map((r) => [r.id, r.reason]));
-      } catch (error) {
-        if (!isPermanent(error)) throw error;
-        refused = new Map(chunk.map((r) => [r.id, messageOf(error)]));
-      }
-      const answers = chunk.map((r): SyncAck => {
-        const reason = refused.get(r.id);
-        const ack = { id: r.id, resuscitationId: recordId };
-        return reason ? { ...ack, state: 2, reason } : { ...ack, state: 1 };
+      const d: Delivery<Row> = {
+        send: (part) => transport.batch(recordId, kind, part.map(wire), o.clockOffsetMs),
+        verdicts: new Map(),
+        serverError: null,
+      };
+      const unsent = await deliver(chunk, o.bisect ?? false, d);
+      const answers = [...d.verdicts].map(([id, reason]): SyncAck => {
+        const ack = { id, resuscitationId: recordId };
+        return reason === null ? { ...ack, state: 1 } : { ...ack, state: 2, reason };
       });
       await db.acks.bulkPut(answers);
-      result.sent += chunk.length - refused.size;
-      result.refused += refused.size;
+      result.sent += answers.filter((a) => a.state === 1).length;
+      result.refused += answers.filter((a) => a.state === 2).length;
+      if (unsent.length === chunk.length) throw d.serverError;
+      if (unsent.length) result.serverError = d.serverError;
     }
   }
   return result;
@@ -105,15 +116,19 @@ export async function drainOutbox(
   db: OfflineDb,
   transport: SyncTransport,
   clockOffsetMs?: number,
+  bisect = false,
 ): Promise<DrainResult> {
   const blocked = await sendOps(db, transport);
   const total: DrainResult = { sent: 0, refused: 0 };
+  let serverError: unknown = null;
   const acked = new Set(await db.acks.toCollection().primaryKeys());
   for (const kind of ['events', 'etco2', 'waveform'] as const) {
-    const r = await sendItems(db, transport, kind, blocked, acked, clockOffsetMs);
+    const r = await sendItems(db, transport, kind, blocked, acked, { clockOffsetMs, bisect });
     total.sent += r.sent;
     total.refused += r.refused;
+    serverError ??= r.serverError;
   }
+  if (serverError) throw serverError;
   return total;
 }
 

@@ -3,6 +3,7 @@ import { backoffDelay, type BackoffOptions } from './backoff';
 import { measureClock } from './clock';
 import { type OfflineDb } from './db';
 import { countWaiting, drainOutbox, type DrainResult } from './outbox';
+import { ClockRefusedError } from './send-batch';
 import type { SyncTransport } from './transport';
 import { writeSignal } from './write-signal';
 
@@ -13,7 +14,12 @@ export interface EngineState {
   lastError: string | null;
   lastSyncAt: number | null;
   clockOffsetMs: number | null;
+  /** The server refused this tablet's clock (nothing sent): the recorder should check it. */
+  clockRefused: string | null;
 }
+
+/** Consecutive failed drains after which a batch failing with 5xx is split. */
+const BISECT_AFTER_FAILURES = 2;
 
 export interface EngineOptions {
   intervalMs?: number;
@@ -62,6 +68,7 @@ export class SyncEngine {
       lastError: null,
       lastSyncAt: null,
       clockOffsetMs: null,
+      clockRefused: null,
     };
   }
 
@@ -106,7 +113,12 @@ export class SyncEngine {
         { key: 'clock', value: { offsetMs, at: context.serverTime } },
       ]);
       const result = (await countWaiting(this.db))
-        ? await drainOutbox(this.db, this.transport, offsetMs)
+        ? await drainOutbox(
+            this.db,
+            this.transport,
+            offsetMs,
+            this.state.failures >= BISECT_AFTER_FAILURES,
+          )
         : { sent: 0, refused: 0 };
       this.nextAttemptAt = 0;
       this.set({
@@ -115,6 +127,7 @@ export class SyncEngine {
         lastError: null,
         lastSyncAt: this.o.now(),
         clockOffsetMs: offsetMs,
+        clockRefused: null,
       });
       return result;
     } catch (error) {
@@ -126,6 +139,7 @@ export class SyncEngine {
         syncing: false,
         failures,
         lastError: error instanceof Error ? error.message : String(error),
+        clockRefused: error instanceof ClockRefusedError ? error.message : null,
       });
       return null;
     }

@@ -1,6 +1,7 @@
 import { eventLabel } from '@upstroke/contracts';
 import type { OfflineDb } from './db';
 import { failedOps } from './outbox';
+import type { BatchKind, SyncTransport } from './transport';
 import { writeSignal } from './write-signal';
 
 /** A record-level write (start, details, team) the server refused for good. */
@@ -88,4 +89,45 @@ export async function retrySyncProblems(db: OfflineDb): Promise<number> {
   });
   if (count) writeSignal.emit();
   return count;
+}
+
+async function kindsOf(db: OfflineDb, ids: string[]): Promise<BatchKind[]> {
+  const [events, values] = await Promise.all([db.events.bulkGet(ids), db.etco2.bulkGet(ids)]);
+  return ids.map((_, i) => (events[i] ? 'events' : values[i] ? 'etco2' : 'waveform'));
+}
+
+/**
+ * A lead gives up on refused entries (all of them, or those named), with a reason. The
+ * server's audit log records who, what and why first; then each entry is marked discarded
+ * here: kept on the tablet, no longer counted as refused. Returns how many were discarded.
+ */
+export async function discardRefused(
+  db: OfflineDb,
+  transport: Pick<SyncTransport, 'discard'>,
+  reason: string,
+  ids?: string[],
+): Promise<number> {
+  const refused = (await db.acks.where('state').equals(2).toArray()).filter(
+    (a) => !ids || ids.includes(a.id),
+  );
+  const byRecord = new Map<string, typeof refused>();
+  for (const a of refused)
+    byRecord.set(a.resuscitationId, [...(byRecord.get(a.resuscitationId) ?? []), a]);
+  for (const [recordId, acks] of byRecord) {
+    for (let i = 0; i < acks.length; i += 5000) {
+      const part = acks.slice(i, i + 5000);
+      const kinds = await kindsOf(
+        db,
+        part.map((a) => a.id),
+      );
+      const items = part.map((a, j) => ({
+        id: a.id,
+        kind: kinds[j],
+        refusal: (a.reason ?? '').slice(0, 500),
+      }));
+      await transport.discard(recordId, { reason, items });
+      await db.acks.bulkPut(part.map((a) => ({ ...a, state: 3 as const, discardReason: reason })));
+    }
+  }
+  return refused.length;
 }

@@ -1,6 +1,8 @@
 import {
   type BatchResult,
   batchResultSchema,
+  type DiscardRefused,
+  discardResultSchema,
   type RecordingContext,
   recordingContextSchema,
 } from '@upstroke/contracts';
@@ -19,6 +21,8 @@ export interface SyncTransport {
     items: object[],
     clockOffsetMs: number | undefined,
   ): Promise<BatchResult>;
+  /** Records on the server (audit) that a lead discarded refused entries, and why. */
+  discard(id: string, body: DiscardRefused): Promise<void>;
 }
 
 const bodyKey: Record<BatchKind, string> = {
@@ -55,6 +59,13 @@ export const apiTransport: SyncTransport = {
       body: { [bodyKey[kind]]: items },
       headers,
       schema: batchResultSchema,
+    });
+  },
+  async discard(id, body) {
+    await apiFetch(`/resuscitations/${id}/discards`, {
+      method: 'POST',
+      body,
+      schema: discardResultSchema,
     });
   },
 };

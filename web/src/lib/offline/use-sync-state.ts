@@ -12,6 +12,8 @@ export interface SyncState {
   syncing: boolean;
   lastError: string | null;
   clockOffsetMs: number | null;
+  /** The server refused this tablet's clock: its entries wait until the time is fixed. */
+  clockRefused: string | null;
 }
 
 /** "All saved", "N waiting" or "Offline", live from IndexedDB and the sync engine. */
@@ -27,5 +29,6 @@ export function useSyncState(): SyncState {
     syncing: engine.syncing,
     lastError: engine.lastError,
     clockOffsetMs: engine.clockOffsetMs,
+    clockRefused: engine.clockRefused,
   };
 }

@@ -1,8 +1,25 @@
 import CloudDone from '@mui/icons-material/CloudDone';
 import CloudOff from '@mui/icons-material/CloudOff';
 import CloudUpload from '@mui/icons-material/CloudUpload';
-import { Chip } from '@mui/material';
+import Schedule from '@mui/icons-material/Schedule';
+import { Chip, Tooltip } from '@mui/material';
 import { useSyncState } from '../../../lib/offline';
+
+/** The server refused the tablet's clock: entries are kept and wait until the time is fixed. */
+function ClockWarning({ reason }: { reason: string }) {
+  return (
+    <Tooltip title={reason}>
+      <Chip
+        role="alert"
+        icon={<Schedule />}
+        color="warning"
+        label="Check this tablet's date and time"
+        aria-label="Sync paused: check this tablet's date and time; entries are kept on the tablet"
+        sx={{ fontWeight: 600, minHeight: 40 }}
+      />
+    </Tooltip>
+  );
+}
 
 /** "All saved", "N waiting" or "Offline" — in the top bar on every screen. */
 export function SyncIndicator() {
@@ -24,18 +41,21 @@ export function SyncIndicator() {
       <CloudDone />
     );
   return (
-    <Chip
-      role="status"
-      aria-label={`Sync: ${label}`}
-      icon={icon}
-      label={label}
-      title={s.lastError ?? undefined}
-      sx={{
-        bgcolor: 'rgba(255,255,255,0.16)',
-        color: 'inherit',
-        '& .MuiChip-icon': { color: 'inherit' },
-        fontWeight: 600,
-      }}
-    />
+    <>
+      {s.clockRefused && <ClockWarning reason={s.clockRefused} />}
+      <Chip
+        role="status"
+        aria-label={`Sync: ${label}`}
+        icon={icon}
+        label={label}
+        title={s.lastError ?? undefined}
+        sx={{
+          bgcolor: 'rgba(255,255,255,0.16)',
+          color: 'inherit',
+          '& .MuiChip-icon': { color: 'inherit' },
+          fontWeight: 600,
+        }}
+      />
+    </>
   );
 }

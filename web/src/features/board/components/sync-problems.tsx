@@ -17,6 +17,7 @@ import { useState } from 'react';
 import { Loading } from '../../../components/ui/states';
 import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { listSyncProblems, offlineDb, retrySyncProblems, useSyncState } from '../../../lib/offline';
+import { DiscardRefused } from './discard-refused';
 
 const opText = { create: 'Starting the record', patch: 'Record details or team' } as const;
 
@@ -79,6 +80,7 @@ function SyncProblemsDialog({ open, onClose }: { open: boolean; onClose: () => v
             ))}
           </List>
         )}
+        <DiscardRefused count={problems?.items.length ?? 0} />
       </DialogContent>
       <DialogActions>
         <Button onClick={onClose}>Close</Button>
