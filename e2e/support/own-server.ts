@@ -59,6 +59,8 @@ export class OwnServer {
         // The same secret across restarts: the tablet's session outlives the process.
         JWT_SECRET: 'own-server-secret',
         LOGIN_LIMIT_PER_MINUTE: '100',
+        // Sign-in attempts are counted in the shared database, across every test's server.
+        LOGIN_IP_LIMIT_PER_MINUTE: '1000',
       },
     });
     if (!(await healthy(this.url, 30_000))) throw new Error('the app did not start');

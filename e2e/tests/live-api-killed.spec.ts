@@ -51,6 +51,9 @@ describe('live recording while the API is killed during a sync', () => {
     await page.waitForURL(/\/live\/[0-9a-f-]{36}$/);
     const recordId = page.url().split('/').pop() as string;
     await page.getByRole('status', { name: 'Sync: All saved' }).waitFor();
+    // As in the offline journey: the app is stored for offline use before the network goes,
+    // so a service-worker install finishing offline cannot take the screen away.
+    await page.evaluate(() => navigator.serviceWorker.ready.then(() => true));
 
     await context.setOffline(true);
     await page.getByRole('status', { name: /^Sync: Offline/ }).waitFor();

@@ -120,6 +120,9 @@ describe('admin: deactivation, role changes, password resets and the last admin'
     const config = {
       ...loadConfig(),
       jwtSecret: 'test-secret',
+      // Sign-in attempts are counted in PostgreSQL, shared with the other test app.
+      loginLimitPerMinute: 1000,
+      loginIpLimitPerMinute: 1000,
       smtp: { host: '127.0.0.1', port: await freePort(), from: 'x@kestrel.test' },
     };
     const app = await createApp(config);
