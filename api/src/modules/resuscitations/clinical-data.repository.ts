@@ -138,36 +138,41 @@ export class ClinicalDataRepository {
       );
     if (!record) return undefined;
     const where = { resuscitationId: id };
-    const [events, etco2, chunks, profile] = await Promise.all([
-      q('resuscitationEvents')
-        .where(where)
-        .orderBy([{ column: 'at' }, { column: 'receivedAt' }])
-        .select<StoredEventRow[]>(
-          'id',
-          'at',
-          'kind',
-          'data',
-          'recordedBy',
-          'amendment',
-          'amendmentId',
-        ),
-      q('etco2Samples')
-        .where(where)
-        .orderBy('at')
-        .select<StoredEtco2Row[]>('id', 'at', 'value', 'unit', 'source'),
-      q('waveformChunks')
-        .where(where)
-        .orderBy('startAt')
-        .select<StoredChunkRow[]>(
-          'startAt',
-          'sampleRateHz',
-          'unit',
-          'source',
-          'sampleCount',
-          'samples',
-        ),
-      this.profileInForce(q, record.profileId, record.siteId),
-    ]);
+    // A transaction is one connection: its reads go one after another (pg refuses a query
+    // on a client that is still busy); without one, the pool serves them side by side.
+    const [events, etco2, chunks, profile] = await readAll(Boolean(trx), [
+      () =>
+        q('resuscitationEvents')
+          .where(where)
+          .orderBy([{ column: 'at' }, { column: 'receivedAt' }])
+          .select<StoredEventRow[]>(
+            'id',
+            'at',
+            'kind',
+            'data',
+            'recordedBy',
+            'amendment',
+            'amendmentId',
+          ),
+      () =>
+        q('etco2Samples')
+          .where(where)
+          .orderBy('at')
+          .select<StoredEtco2Row[]>('id', 'at', 'value', 'unit', 'source'),
+      () =>
+        q('waveformChunks')
+          .where(where)
+          .orderBy('startAt')
+          .select<StoredChunkRow[]>(
+            'startAt',
+            'sampleRateHz',
+            'unit',
+            'source',
+            'sampleCount',
+            'samples',
+          ),
+      () => this.profileInForce(q, record.profileId, record.siteId),
+    ] as const);
     return toStoredRecord(record, { events, etco2, chunks, profile });
   }
 
@@ -191,4 +196,19 @@ export class ClinicalDataRepository {
       .first<StoredProfile | undefined>(cols);
     return latest ?? null;
   }
+}
+
+type Results<T extends readonly (() => PromiseLike<unknown>)[]> = {
+  -readonly [K in keyof T]: Awaited<ReturnType<T[K]>>;
+};
+
+/** Runs the reads one by one on a single connection, side by side otherwise. */
+async function readAll<T extends readonly (() => PromiseLike<unknown>)[]>(
+  oneConnection: boolean,
+  reads: T,
+): Promise<Results<T>> {
+  if (!oneConnection) return (await Promise.all(reads.map((read) => read()))) as Results<T>;
+  const out: unknown[] = [];
+  for (const read of reads) out.push(await read());
+  return out as Results<T>;
 }
