@@ -96,7 +96,7 @@ describe('Live follows the patient: ROSC, re-arrest, end', () => {
     await context.close();
   });
 
-  it('two tablets: ROSC tapped on one stops the prompts on the other by push, not by the 5-s ask', async () => {
+  it('two tablets: ROSC and an arrest-time change on one reach the other by push, not by the 5-s ask', async () => {
     const a = await newTabletContext(browser);
     const b = await newTabletContext(browser);
     const pageA = await a.newPage();
@@ -135,6 +135,23 @@ describe('Live follows the patient: ROSC, re-arrest, end', () => {
     // B never asked the server: the ROSC came by the live feed.
     assert.deepEqual(asked, []);
     process.stdout.write(`# ROSC on tablet A reached tablet B in ${tookMs} ms\n`);
+
+    // "The arrest was 10 min before": a correction on A moves B's clocks too, by push.
+    const sinceArrest = (p: Page) => p.getByRole('timer', { name: 'Since arrest' });
+    assert.match((await sinceArrest(pageB).textContent()) ?? '', /^\d:\d\d$/);
+    await pageA.getByRole('button', { name: 'Arrest time', exact: true }).click();
+    const dialog = pageA.getByRole('dialog', { name: 'Arrest time' });
+    await dialog.getByRole('button', { name: '10 min', exact: true }).click();
+    await dialog.getByLabel('Reason').fill('Collapse seen by the ward nurse before the call');
+    await dialog.getByRole('button', { name: 'Set arrest time' }).click();
+    await dialog.waitFor({ state: 'detached' });
+    await sinceArrest(pageA)
+      .filter({ hasText: /^1\d:\d\d$/ })
+      .waitFor();
+    await sinceArrest(pageB)
+      .filter({ hasText: /^1\d:\d\d$/ })
+      .waitFor({ timeout: 20_000 });
+    assert.deepEqual(asked, []);
     await a.close();
     await b.close();
   });

@@ -5,6 +5,7 @@ import { ErrorState, Loading } from '../../../components/ui/states';
 import { type LocalResuscitation, offlineDb, tapWriter } from '../../../lib/offline';
 import { useMarkLiveOpen } from '../hooks/use-live-open';
 import { useLiveRecord } from '../hooks/use-live-record';
+import { arrestAtInForce } from '../lib/arrest-time';
 import { endSummary } from '../lib/end-summary';
 import { liveState } from '../lib/live-state';
 import { EndedSummary } from './ended-summary';
@@ -25,7 +26,13 @@ export function LivePage() {
 
 /** While the code runs, the Live screen; once it has ended, its read-only summary. */
 function LiveOrSummary(props: { record: LocalResuscitation } & LiveData) {
-  const { record, events, etco2, acks } = props;
+  const { events, etco2, acks } = props;
+  // Another tablet's change of the arrest time arrives as corrections: every clock follows.
+  const arrestAt = arrestAtInForce(events, props.record.arrestAt);
+  const record = useMemo(
+    () => (arrestAt === props.record.arrestAt ? props.record : { ...props.record, arrestAt }),
+    [props.record, arrestAt],
+  );
   const state = useMemo(() => liveState(events, record.arrestAt), [events, record.arrestAt]);
   const summary = useMemo(
     () => (state.ended ? endSummary(state, record.arrestAt) : null),
@@ -37,7 +44,7 @@ function LiveOrSummary(props: { record: LocalResuscitation } & LiveData) {
     if (summary && record.status === 'open')
       void offlineDb.resuscitations.update(record.id, { status: 'closed' });
   }, [summary, record.id, record.status]);
-  if (!summary) return <LiveScreen state={state} {...props} />;
+  if (!summary) return <LiveScreen state={state} {...props} record={record} />;
   return (
     <Stack spacing={1.5}>
       <Typography variant="h1" sx={{ fontSize: '1.6rem' }}>

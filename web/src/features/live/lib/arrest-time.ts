@@ -1,4 +1,4 @@
-import { supersededByMap } from '@upstroke/capno';
+import { eventsInForce, supersededByMap } from '@upstroke/capno';
 import type { EventData } from '@upstroke/contracts';
 import type { LocalEvent } from '../../../lib/offline';
 
@@ -33,4 +33,19 @@ export function arrestCorrection(
     replacement: { kind: 'arrest', data: {}, at: arrestAt },
   });
   return { corrections, arrestAt };
+}
+
+/**
+ * The arrest time the clocks count from. Once the arrest time has been changed ("arrest was
+ * N min before", on this tablet or pushed from another), the arrest in force after the
+ * corrections — also when a change was undone; else the record's own time.
+ */
+export function arrestAtInForce(events: readonly LocalEvent[], recordArrestAt: string): string {
+  const changed = events.some(
+    (e) =>
+      e.kind === 'correction' &&
+      (e.data as { replacement?: { kind?: string } }).replacement?.kind === 'arrest',
+  );
+  if (!changed) return recordArrestAt;
+  return eventsInForce(events).find((e) => e.kind === 'arrest')?.at ?? recordArrestAt;
 }
