@@ -72,7 +72,7 @@ describe('Live follows the patient: ROSC, re-arrest, end', () => {
     await page.getByRole('link', { name: 'Open debrief' }).waitFor();
 
     await page.getByRole('link', { name: 'Board' }).first().click();
-    const recent = page.getByRole('list', { name: 'Recent on your sites' });
+    const recent = page.getByRole('list', { name: 'Records on your sites' });
     await recent.locator(`a[href="/debrief/${id}"]`).waitFor();
     assert.equal(await page.locator(`a[href="/live/${id}"]`).count(), 0);
     await recent.locator(`a[href="/debrief/${id}"]`).click();

@@ -88,14 +88,39 @@ export const resuscitationSchema = z.object({
 });
 export type Resuscitation = z.infer<typeof resuscitationSchema>;
 
-export const listResuscitationsQuerySchema = z.object({
-  status: resuscitationStatusSchema.optional(),
-  siteId: uuidSchema.optional(),
-  from: isoDateTimeSchema.optional(),
-  to: isoDateTimeSchema.optional(),
-  limit: z.coerce.number().int().min(1).max(500).default(100),
-  offset: z.coerce.number().int().min(0).default(0),
+/**
+ * `GET /api/resuscitations`: the Board's search and filters, one page at a time. `q` looks in
+ * the location, patient reference and unit name; `signed` splits signed from not yet signed;
+ * `mine` keeps the records the user started or signed.
+ */
+export const listResuscitationsQuerySchema = z
+  .object({
+    status: resuscitationStatusSchema.optional(),
+    siteId: uuidSchema.optional(),
+    unitId: uuidSchema.optional(),
+    from: isoDateTimeSchema.optional(),
+    to: isoDateTimeSchema.optional(),
+    q: z.string().trim().max(100, 'at most 100 characters').optional(),
+    signed: z.enum(['signed', 'unsigned']).optional(),
+    mine: z
+      .enum(['true', 'false'], { error: 'mine is true or false' })
+      .transform((v) => v === 'true')
+      .optional(),
+    limit: z.coerce.number().int().min(1).max(500).default(100),
+    offset: z.coerce.number().int().min(0).max(1_000_000).default(0),
+  })
+  .strict()
+  .refine((f) => !f.from || !f.to || f.from < f.to, {
+    path: ['to'],
+    error: 'to must be after from',
+  });
+export type ListResuscitationsQuery = z.input<typeof listResuscitationsQuerySchema>;
+
+/** One row of the list: the record with its unit's name. */
+export const resuscitationListItemSchema = resuscitationSchema.extend({
+  unitName: z.string().nullable().optional(),
 });
+export type ResuscitationListItem = z.infer<typeof resuscitationListItemSchema>;
 
 /** One EtCO2 value as synced from a tablet (`POST …/etco2/batch`). */
 export const etco2SampleSchema = z

@@ -17,11 +17,19 @@ export interface ResuscitationRow extends Omit<
 export interface ListFilter {
   siteIds: string[];
   status?: ResuscitationStatus;
+  unitId?: string;
   from?: string;
   to?: string;
+  q?: string;
+  signed?: 'signed' | 'unsigned';
+  /** Records this user started or signed. */
+  mineOf?: string;
   limit: number;
   offset: number;
 }
+
+/** `%`, `_` and `\` match themselves in a search. */
+const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 const columns = [
   'id',
@@ -83,17 +91,38 @@ export class ResuscitationsRepository {
       .update({ ...patch, updatedAt: new Date() });
   }
 
-  async list(filter: ListFilter): Promise<{ items: ResuscitationRow[]; total: number }> {
-    const q = this.db('resuscitations').whereIn('siteId', filter.siteIds);
-    if (filter.status) q.where('status', filter.status);
-    if (filter.from) q.where('arrestAt', '>=', filter.from);
-    if (filter.to) q.where('arrestAt', '<', filter.to);
+  async list(
+    filter: ListFilter,
+  ): Promise<{ items: (ResuscitationRow & { unitName: string | null })[]; total: number }> {
+    const q = this.db('resuscitations as r')
+      .leftJoin('units as u', 'u.id', 'r.unitId')
+      .whereIn('r.siteId', filter.siteIds);
+    if (filter.status) q.where('r.status', filter.status);
+    if (filter.unitId) q.where('r.unitId', filter.unitId);
+    if (filter.signed) q.where('r.status', filter.signed === 'signed' ? '=' : '<>', 'signed');
+    if (filter.mineOf) {
+      const me = filter.mineOf;
+      q.where((w) => void w.where('r.createdBy', me).orWhere('r.signedBy', me));
+    }
+    if (filter.from) q.where('r.arrestAt', '>=', filter.from);
+    if (filter.to) q.where('r.arrestAt', '<', filter.to);
+    if (filter.q) {
+      const like = `%${likeEscape(filter.q)}%`;
+      q.where((w) => {
+        for (const col of ['r.location', 'r.patientRef', 'u.name'])
+          void w.orWhereRaw(`?? ilike ? escape '\\'`, [col, like]);
+      });
+    }
     const [{ count }] = await q.clone().count<{ count: number }[]>({ count: '*' });
     const items = await q
-      .orderBy('arrestAt', 'desc')
+      .orderBy('r.arrestAt', 'desc')
+      .orderBy('r.id')
       .limit(filter.limit)
       .offset(filter.offset)
-      .select<ResuscitationRow[]>(columns);
+      .select<(ResuscitationRow & { unitName: string | null })[]>([
+        ...columns.map((c) => `r.${c}`),
+        'u.name as unitName',
+      ]);
     return { items, total: Number(count) };
   }
 

@@ -1,6 +1,8 @@
 import { Injectable } from '@nestjs/common';
+import type { z } from 'zod';
 import type {
   CreateResuscitation,
+  listResuscitationsQuerySchema,
   PatchResuscitation,
   RecordEntries,
   Resuscitation,
@@ -10,11 +12,7 @@ import { badRequest, conflict, forbidden } from '../../common/errors';
 import { AuditRepository } from '../audit/audit.repository';
 import { ClinicalDataRepository } from './clinical-data.repository';
 import { ResuscitationAccess } from './resuscitation-access';
-import {
-  type ListFilter,
-  type ResuscitationRow,
-  ResuscitationsRepository,
-} from './resuscitations.repository';
+import { type ResuscitationRow, ResuscitationsRepository } from './resuscitations.repository';
 
 export function toResuscitation(
   row: ResuscitationRow,
@@ -26,6 +24,8 @@ export function toResuscitation(
     signedAt: row.signedAt ? row.signedAt.toISOString() : null,
   };
 }
+
+type ListResuscitationsQueryOut = z.infer<typeof listResuscitationsQuerySchema>;
 
 @Injectable()
 export class ResuscitationsService {
@@ -75,10 +75,12 @@ export class ResuscitationsService {
     return { created, record: toResuscitation(record) };
   }
 
-  async list(user: AuthUser, query: Omit<ListFilter, 'siteIds'> & { siteId?: string }) {
-    const siteIds = query.siteId ? user.siteIds.filter((s) => s === query.siteId) : user.siteIds;
-    const { items, total } = await this.records.list({ ...query, siteIds });
-    return { items: items.map(toResuscitation), total };
+  async list(user: AuthUser, query: ListResuscitationsQueryOut) {
+    const { siteId, mine, ...rest } = query;
+    const siteIds = siteId ? user.siteIds.filter((s) => s === siteId) : user.siteIds;
+    const mineOf = mine ? user.id : undefined;
+    const { items, total } = await this.records.list({ ...rest, siteIds, mineOf });
+    return { items: items.map((r) => ({ ...toResuscitation(r), unitName: r.unitName })), total };
   }
 
   async get(user: AuthUser, id: string) {

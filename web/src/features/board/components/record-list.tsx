@@ -11,6 +11,32 @@ export interface RecordRow {
   to: string;
 }
 
+/** Rows that each open a record (Live while it runs, Debrief once it has ended). */
+export function RecordRows({
+  label,
+  rows,
+  empty,
+}: {
+  label: string;
+  rows: RecordRow[];
+  empty: string;
+}) {
+  const { dateTime } = useDisplayFormat();
+  if (rows.length === 0) return <Typography color="text.secondary">{empty}</Typography>;
+  return (
+    <List aria-label={label}>
+      {rows.map((r) => (
+        <ListItemButton key={r.id} component={Link} to={r.to} sx={{ minHeight: 56 }}>
+          <ListItemText
+            primary={`${dateTime(r.arrestAt)} · ${labelOf(resuscitationStatusLabels, r.status)}`}
+            secondary={r.detail}
+          />
+        </ListItemButton>
+      ))}
+    </List>
+  );
+}
+
 export function RecordList({
   title,
   rows,
@@ -20,26 +46,12 @@ export function RecordList({
   rows: RecordRow[];
   empty: string;
 }) {
-  const { dateTime } = useDisplayFormat();
   return (
     <Paper variant="outlined" sx={{ p: 1.5 }}>
       <Typography variant="h2" sx={{ mb: 1 }}>
         {title}
       </Typography>
-      {rows.length === 0 ? (
-        <Typography color="text.secondary">{empty}</Typography>
-      ) : (
-        <List aria-label={title}>
-          {rows.map((r) => (
-            <ListItemButton key={r.id} component={Link} to={r.to} sx={{ minHeight: 56 }}>
-              <ListItemText
-                primary={`${dateTime(r.arrestAt)} · ${labelOf(resuscitationStatusLabels, r.status)}`}
-                secondary={r.detail}
-              />
-            </ListItemButton>
-          ))}
-        </List>
-      )}
+      <RecordRows label={title} rows={rows} empty={empty} />
     </Paper>
   );
 }
