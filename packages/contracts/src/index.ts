@@ -15,3 +15,4 @@ export * from './live-feed.js';
 export * from './labels.js';
 export * from './formats.js';
 export * from './discards.js';
+export * from './spc.js';
