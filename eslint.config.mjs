@@ -1,9 +1,41 @@
 // @ts-check
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
-import importX from 'eslint-plugin-import-x';
+import importX, { createNodeResolver } from 'eslint-plugin-import-x';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
+import { readdirSync } from 'node:fs';
+import { join } from 'node:path';
+
+const root = import.meta.dirname;
+const foldersIn = (dir) =>
+  readdirSync(join(root, dir), { withFileTypes: true })
+    .filter((d) => d.isDirectory())
+    .map((d) => d.name);
+
+/**
+ * One-way imports on the tablet app (shared code → features → app): a feature never imports
+ * another feature (the app shell composes them), shared code never imports a feature or the app.
+ */
+const webZones = [
+  ...foldersIn('web/src/features').map((name) => ({
+    target: `web/src/features/${name}`,
+    from: 'web/src/features',
+    except: [`./${name}`],
+    message:
+      'Features never import one another: move shared code to web/src/{components,hooks,lib} or compose in web/src/app.',
+  })),
+  {
+    target: ['web/src/components', 'web/src/hooks', 'web/src/lib', 'web/src/config'],
+    from: ['web/src/features', 'web/src/app'],
+    message: 'Shared code never imports a feature or the app shell.',
+  },
+  {
+    target: 'web/src/features',
+    from: 'web/src/app',
+    message: 'Features never import the app shell.',
+  },
+];
 
 export default tseslint.config(
   {
@@ -29,6 +61,12 @@ export default tseslint.config(
       globals: { ...globals.node },
     },
     plugins: { 'import-x': importX },
+    settings: {
+      // TypeScript sources import without extensions; without this, import rules see nothing.
+      'import-x/resolver-next': [
+        createNodeResolver({ extensions: ['.ts', '.tsx', '.d.ts', '.js', '.mjs', '.json'] }),
+      ],
+    },
     rules: {
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/no-floating-promises': [
@@ -49,6 +87,7 @@ export default tseslint.config(
         { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
       ],
       'import-x/no-cycle': ['error', { maxDepth: 10 }],
+      'import-x/no-restricted-paths': ['error', { basePath: root, zones: [...webZones] }],
     },
   },
   {

@@ -22,11 +22,7 @@ const screens = {
   live: {
     targetKB: 250,
     budgetKB: 345,
-    sources: [
-      'src/app/layout.tsx',
-      'src/background.ts',
-      'src/features/live/components/live-page.tsx',
-    ],
+    sources: ['src/app/layout.tsx', 'src/background.ts', 'src/app/routes/live.tsx'],
   },
 };
 

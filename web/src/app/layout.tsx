@@ -13,7 +13,7 @@ import {
 } from '@mui/material';
 import { roleLabels } from '@upstroke/contracts';
 import { NavLink, Outlet } from 'react-router-dom';
-import { useAuth } from '../features/auth/use-auth';
+import { useAuth } from '../hooks/use-auth';
 import { useColorMode } from '../hooks/use-color-mode';
 import { navEntries } from './nav';
 import { statusSlot } from './status-slot';

@@ -1,7 +1,7 @@
 import type { Role } from '@upstroke/contracts';
 import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
-import { useAuth } from '../features/auth/use-auth';
+import { useAuth } from '../hooks/use-auth';
 import { homeFor } from './nav';
 import { ForbiddenPage } from './routes/not-found';
 

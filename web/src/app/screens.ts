@@ -9,8 +9,8 @@ export const screens = {
   setPassword: () =>
     import('../features/account/components/set-password-page').then((m) => m.SetPasswordPage),
   board: () => import('../features/board/components/board-page').then((m) => m.BoardPage),
-  live: () => import('../features/live/components/live-page').then((m) => m.LivePage),
-  debrief: () => import('../features/debrief/components/debrief-page').then((m) => m.DebriefPage),
+  live: () => import('./routes/live').then((m) => m.LiveRoute),
+  debrief: () => import('./routes/debrief').then((m) => m.DebriefRoute),
   trends: () => import('../features/trends/components/trends-page').then((m) => m.TrendsPage),
   review: () =>
     import('../features/reviews/components/review-queue-page').then((m) => m.ReviewQueuePage),

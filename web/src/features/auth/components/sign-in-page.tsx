@@ -5,7 +5,7 @@ import { useForm } from 'react-hook-form';
 import { Navigate, useLocation } from 'react-router-dom';
 import { ApiRequestError } from '../../../lib/api-client';
 import { useLogin } from '../api/login';
-import { useAuth } from '../use-auth';
+import { useAuth } from '../../../hooks/use-auth';
 
 function errorText(error: unknown): string {
   if (error instanceof ApiRequestError) {

@@ -3,7 +3,7 @@ import { useLiveQuery } from 'dexie-react-hooks';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 import { PageHeader } from '../../../components/ui/states';
 import { offlineDb } from '../../../lib/offline';
-import { useAuth } from '../../auth/use-auth';
+import { useAuth } from '../../../hooks/use-auth';
 import { RecordList } from './record-list';
 import { RecordsPanel } from './records-panel';
 import { StartPanel } from './start-panel';

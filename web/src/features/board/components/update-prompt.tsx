@@ -1,7 +1,7 @@
 /// <reference types="vite-plugin-pwa/react" />
 import { Button, Snackbar } from '@mui/material';
 import { useRegisterSW } from 'virtual:pwa-register/react';
-import { useIsLiveOpen } from '../../live/hooks/use-live-open';
+import { useIsLiveOpen } from '../../../hooks/use-live-open';
 
 /**
  * Registers the service worker (the app then opens with no network) and offers a new version

@@ -2,7 +2,7 @@ import type { SiteContext } from '@upstroke/contracts';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { useState } from 'react';
 import { offlineDb } from '../../../lib/offline';
-import { useAuth } from '../../auth/use-auth';
+import { useAuth } from '../../../hooks/use-auth';
 
 const key = 'upstroke.lastSiteUnit';
 

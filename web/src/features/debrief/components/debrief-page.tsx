@@ -5,12 +5,12 @@ import { useParams } from 'react-router-dom';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 import { ErrorState, Loading, PageHeader } from '../../../components/ui/states';
 import { formatterFor } from '../../../hooks/use-display-format';
-import { useAuth } from '../../auth/use-auth';
+import { useAuth } from '../../../hooks/use-auth';
 import { useDebrief } from '../api/get-debrief';
 import { ClosingPanel } from './closing-panel';
 import { ExportActions } from './export-actions';
 import { FindingsList } from './findings-list';
-import { ImportSlot } from './import-slot';
+import { type ImportPanelSlot, ImportSlot } from './import-slot';
 import { LeadNotes } from './lead-notes';
 import { MeasureCards } from './measure-cards';
 import { TimelineChart } from './timeline-chart';
@@ -30,7 +30,7 @@ function Section({ title, children }: { title: string; children: React.ReactNode
 }
 
 /** Debrief: timeline, measures, findings, notes, closing details and signature, exports. */
-export function DebriefPage() {
+export function DebriefPage({ importPanel }: { importPanel: ImportPanelSlot }) {
   const { id = '' } = useParams();
   const { hasRole } = useAuth();
   const query = useDebrief(id);
@@ -119,7 +119,9 @@ export function DebriefPage() {
           </Box>
         )}
       </Section>
-      {hasRole('lead', 'recorder') && !offline && <ImportSlot resuscitationId={id} />}
+      {hasRole('lead', 'recorder') && !offline && (
+        <ImportSlot resuscitationId={id} panel={importPanel} />
+      )}
     </Stack>
   );
 }

@@ -1,6 +1,6 @@
 import { Alert, Button, Stack } from '@mui/material';
 import { useState } from 'react';
-import { useAuth } from '../../auth/use-auth';
+import { useAuth } from '../../../hooks/use-auth';
 import { downloadExport } from '../api/download-export';
 import { EmailDialog } from './email-dialog';
 

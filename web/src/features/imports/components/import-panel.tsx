@@ -3,7 +3,7 @@ import type { MonitorImport } from '@upstroke/contracts';
 import { useQueryClient } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
 import { ApiRequestError } from '../../../lib/api-client';
-import { useAuth } from '../../auth/use-auth';
+import { useAuth } from '../../../hooks/use-auth';
 import { useImports } from '../api/get-imports';
 import { uploadImport } from '../api/upload-import';
 import { OffsetEditor } from './offset-editor';

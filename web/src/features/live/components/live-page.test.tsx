@@ -36,13 +36,16 @@ async function seed(events: LocalEvent[]) {
   await offlineDb.events.bulkPut(events);
 }
 
+/** The monitor link belongs to another feature (the app passes it in); these tests leave it out. */
+const NoMonitor = () => null;
+
 function renderLive() {
   const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   return render(
     <QueryClientProvider client={client}>
       <MemoryRouter initialEntries={[`/live/${id}`]}>
         <Routes>
-          <Route path="/live/:id" element={<LivePage />} />
+          <Route path="/live/:id" element={<LivePage monitor={NoMonitor} />} />
           <Route path="/debrief/:id" element={<p>Debrief page</p>} />
         </Routes>
       </MemoryRouter>

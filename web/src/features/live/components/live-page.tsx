@@ -3,16 +3,16 @@ import { useEffect, useMemo } from 'react';
 import { useParams } from 'react-router-dom';
 import { ErrorState, Loading } from '../../../components/ui/states';
 import { type LocalResuscitation, offlineDb, tapWriter } from '../../../lib/offline';
-import { useMarkLiveOpen } from '../hooks/use-live-open';
+import { useMarkLiveOpen } from '../../../hooks/use-live-open';
 import { useLiveRecord } from '../hooks/use-live-record';
 import { arrestAtInForce } from '../lib/arrest-time';
 import { endSummary } from '../lib/end-summary';
 import { liveState } from '../lib/live-state';
 import { EndedSummary } from './ended-summary';
 import { EventLog } from './event-log';
-import { LiveScreen, type LiveData } from './live-screen';
+import { LiveScreen, type LiveData, type MonitorSlot } from './live-screen';
 
-export function LivePage() {
+export function LivePage({ monitor }: { monitor: MonitorSlot }) {
   const { id = '' } = useParams();
   useMarkLiveOpen();
   // Taps are committed by a worker; start it before the first one.
@@ -21,11 +21,13 @@ export function LivePage() {
   if (record === null) return <Loading />;
   if (!record)
     return loadError ? <ErrorState error={loadError} /> : <Loading label="Opening the record…" />;
-  return <LiveOrSummary record={record} events={events} etco2={etco2} acks={acks} />;
+  return (
+    <LiveOrSummary record={record} events={events} etco2={etco2} acks={acks} monitor={monitor} />
+  );
 }
 
 /** While the code runs, the Live screen; once it has ended, its read-only summary. */
-function LiveOrSummary(props: { record: LocalResuscitation } & LiveData) {
+function LiveOrSummary(props: { record: LocalResuscitation; monitor: MonitorSlot } & LiveData) {
   const { events, etco2, acks } = props;
   // Another tablet's change of the arrest time arrives as corrections: every clock follows.
   const arrestAt = arrestAtInForce(events, props.record.arrestAt);

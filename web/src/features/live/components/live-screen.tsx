@@ -1,11 +1,9 @@
 import { Box, Stack } from '@mui/material';
 import type { Thresholds } from '@upstroke/contracts';
-import { memo, useCallback, useDeferredValue, useMemo, useState } from 'react';
+import { type ComponentType, memo, useCallback, useDeferredValue, useMemo, useState } from 'react';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 import type { LocalEtco2, LocalEvent, LocalResuscitation } from '../../../lib/offline';
-import { RosterDialog } from '../../board/components/roster-dialog';
-// Monitor link (issue 5): its panel renders here, beside the EtCO2 trend.
-import { MonitorPanel } from '../../monitor/components/monitor-panel';
+import { RosterDialog } from '../../../components/roster-dialog';
 import { useArrestTime } from '../hooks/use-arrest-time';
 import { useLiveActions } from '../hooks/use-live-actions';
 import { type useLiveRecord, useSiteSettings } from '../hooks/use-live-record';
@@ -31,6 +29,16 @@ import { UndoNotice } from './undo-notice';
 
 export type LiveData = Pick<ReturnType<typeof useLiveRecord>, 'events' | 'etco2' | 'acks'>;
 
+/**
+ * The monitor link's panel, drawn beside the EtCO2 trend. Another feature owns it, so the app
+ * shell passes it in (features never import one another).
+ */
+export type MonitorSlot = ComponentType<{
+  resuscitationId: string;
+  arrestAt: string;
+  onEtco2: (mmHg: number, at: string) => void;
+}>;
+
 /** The recording screen while the code runs: everything on it follows the patient's state. */
 export function LiveScreen({
   record,
@@ -38,7 +46,8 @@ export function LiveScreen({
   events,
   etco2,
   acks,
-}: { record: LocalResuscitation; state: LiveState } & LiveData) {
+  monitor: Monitor,
+}: { record: LocalResuscitation; state: LiveState; monitor: MonitorSlot } & LiveData) {
   const { thresholds, etco2Unit } = useSiteSettings(record.siteId);
   // Typed values taken back by Undo stay in the log (struck through) and leave the rest.
   const kept = useMemo(() => {
@@ -113,7 +122,7 @@ export function LiveScreen({
             lowMmHg={thresholds.lowEtco2MmHg}
             unit={etco2Unit}
           />
-          <MonitorPanel
+          <Monitor
             resuscitationId={record.id}
             arrestAt={record.arrestAt}
             onEtco2={actions.etco2At}

@@ -20,7 +20,7 @@ import {
 } from '@upstroke/contracts';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { updateResuscitation } from '../../../lib/offline';
+import { updateResuscitation } from '../lib/offline';
 
 const roles = rosterRoleSchema.options.map((value) => ({ value, label: rosterRoleLabels[value] }));
 

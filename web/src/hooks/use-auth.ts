@@ -1,6 +1,6 @@
 import type { Role, User } from '@upstroke/contracts';
 import { useSyncExternalStore } from 'react';
-import { authStore } from '../../lib/auth-store';
+import { authStore } from '../lib/auth-store';
 
 export interface Auth {
   user: User | null;
