@@ -22,6 +22,22 @@ function pickUnit(r: Rand) {
   return demoUnits[0];
 }
 
+/**
+ * The demo's one genuine improvement: until the first day of this many calendar months
+ * before today the Emergency team's CPR goes poorly, from then on well every time (an
+ * invented change of practice), so its control chart shows a shift against a baseline set
+ * before it. The other units keep drawing their quality at random.
+ */
+export const IMPROVEMENT_MONTHS_AGO = 7;
+const improvedUnit = demoUnits[0];
+
+/** First instant (UTC) of the improvement, counted from `today`. */
+export function improvementStart(today = new Date()): Date {
+  return new Date(
+    Date.UTC(today.getUTCFullYear(), today.getUTCMonth() - IMPROVEMENT_MONTHS_AGO, 1),
+  );
+}
+
 /** The two latest codes are still open, the next four closed and unsigned, the rest signed. */
 function statusOf(rankFromLatest: number): DemoStatus {
   if (rankFromLatest < 2) return 'open';
@@ -35,6 +51,7 @@ function statusOf(rankFromLatest: number): DemoStatus {
 export function demoPlans(today = new Date()): RecordPlan[] {
   const anchor = Date.UTC(today.getUTCFullYear(), today.getUTCMonth(), today.getUTCDate());
   const r = new Rand(20261202);
+  const changeAt = improvementStart(today).getTime();
   const times = Array.from({ length: DEMO_RECORD_COUNT }, (_, i) => {
     // The two open ones are from the last day; the rest spread over the year.
     const daysAgo = i < 2 ? 1 : 2 + r.uniform() * 362;
@@ -42,6 +59,7 @@ export function demoPlans(today = new Date()): RecordPlan[] {
   }).sort((a, b) => b - a);
   return times.map((t, rank) => {
     const unit = pickUnit(r);
+    const quality = unit === improvedUnit ? (t >= changeAt ? 'good' : 'poor') : undefined;
     return {
       key: `demo:kestrel-bay:${rank}`,
       siteId: demoSiteId,
@@ -53,6 +71,7 @@ export function demoPlans(today = new Date()): RecordPlan[] {
       recorderId: userId('recorder'),
       leadId: userId('lead'),
       bicarbonate: rank === 9,
+      ...(quality ? { quality } : {}),
     };
   });
 }

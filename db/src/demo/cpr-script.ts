@@ -59,11 +59,14 @@ class Builder {
 export interface ScriptOptions {
   /** Give this record a sodium bicarbonate dose (an EtCO2 rise that is not ROSC). */
   bicarbonate?: boolean;
+  /** Fixes the quality instead of the draw (the draw is still made, so later draws match). */
+  quality?: 'good' | 'poor';
 }
 
 /** Plays out one resuscitation: 2-minute cycles, checks, shocks, drugs, airway, outcome. */
 export function cprScript(r: Rand, options: ScriptOptions = {}): CprScript {
-  const good = r.chance(0.55);
+  const drawn = r.chance(0.55);
+  const good = options.quality ? options.quality === 'good' : drawn;
   const shockable = r.chance(0.25); // in-hospital: most first rhythms are non-shockable
   const firstRhythm = shockable ? r.pick(shockableRhythms) : r.chance(0.55) ? 'pea' : 'asystole';
   const s = {

@@ -19,6 +19,8 @@ export interface RecordPlan {
   recorderId: string;
   leadId: string;
   bicarbonate?: boolean;
+  /** Fixes how well CPR goes (a unit's change of practice); drawn at random when absent. */
+  quality?: 'good' | 'poor';
 }
 
 export interface GeneratedRecord {
@@ -33,7 +35,7 @@ const at = (base: Date, sec: number) => new Date(base.getTime() + sec * 1000).to
 /** One invented resuscitation: the record, its events and typed EtCO2 values. */
 export function generateRecord(plan: RecordPlan): GeneratedRecord {
   const r = new Rand(seedOf(plan.key));
-  const script = cprScript(r, { bicarbonate: plan.bicarbonate });
+  const script = cprScript(r, { bicarbonate: plan.bicarbonate, quality: plan.quality });
   const values = etco2Script(r, script);
   // An open record is still being recorded: no end yet, and no outcome.
   const events =
