@@ -16,6 +16,7 @@ import { eventMeasures } from './events/measures.js';
 import { normalizeEvents, type TimedEvent } from './events/normalize.js';
 import { buildTimeline } from './events/timeline.js';
 import { allFindings } from './findings/index.js';
+import { breathIntervals } from './findings/ventilation-findings.js';
 import { resolveThresholds } from './profile.js';
 import { median } from './time.js';
 import { mmHgFactor } from './units.js';
@@ -69,13 +70,11 @@ export function ventilationRate(
   maxGapSec: number,
   dataGaps: readonly Interval[] = [],
 ): number | null {
-  const rates: number[] = [];
-  for (let i = 1; i < breaths.length; i++) {
-    const [a, b] = [breaths[i - 1].tSec, breaths[i].tSec];
-    const acrossGap = dataGaps.some((g) => g.startSec < b && g.endSec > a);
-    if (b - a > 0 && b - a < maxGapSec && !acrossGap) rates.push(60 / (b - a));
-  }
-  return median(rates);
+  const intervals = breathIntervals(breaths, maxGapSec, dataGaps);
+  const rates = new Float64Array(breaths.length);
+  let n = 0;
+  for (const dt of intervals) if (dt > 0) rates[n++] = 60 / dt;
+  return median(rates.subarray(0, n));
 }
 
 /** Measures and findings from events, the EtCO2 series and breaths. */

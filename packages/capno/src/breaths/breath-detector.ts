@@ -22,8 +22,14 @@ export class BreathDetector {
   readonly sampleRateHz: number;
   private readonly o: DetectorOptions;
   private readonly smoothN: number;
-  private readonly smoothBuf: Float64Array;
+  /** The last `hist.length` samples before the current chunk, at `global index % length`. */
   private readonly hist: Float64Array;
+  private chunk: ArrayLike<number> = [];
+  private chunkStart = 0;
+  private scale = 1;
+  private readonly minUp: number;
+  private readonly hiF: number;
+  private readonly loF: number;
   private readonly minExN: number;
   private readonly minInN: number;
   private readonly maxRiseN: number;
@@ -31,8 +37,6 @@ export class BreathDetector {
   private readonly decay: number;
   private segT0 = 0;
   private n = 0;
-  private histPos = 0;
-  private smoothPos = 0;
   private smoothSum = 0;
   private hiDelta = 0;
   private loDelta = 0;
@@ -53,7 +57,6 @@ export class BreathDetector {
     this.o = { ...detectorDefaults, ...options };
     const fs = sampleRateHz;
     this.smoothN = Math.max(1, Math.round(this.o.smoothingSec * fs));
-    this.smoothBuf = new Float64Array(this.smoothN);
     this.hist = new Float64Array(Math.ceil(4 * fs) + this.smoothN);
     this.minExN = Math.round(this.o.minExhalationSec * fs);
     this.minInN = Math.round(this.o.minInspirationSec * fs);
@@ -61,13 +64,12 @@ export class BreathDetector {
     this.holdN = Math.round(this.o.amplitudeHoldSec * fs);
     this.decay = Math.pow(0.5, 1 / (this.o.amplitudeHalfLifeSec * fs));
     this.segT0 = t0Sec;
-    this.updateDeltas();
-  }
-
-  /** Threshold offsets above the baseline; they change only when the amplitude does. */
-  private updateDeltas(): void {
-    this.hiDelta = hiDeltaOf(this.o, this.amp);
-    this.loDelta = loDeltaOf(this.o, this.amp);
+    this.minUp = this.o.minUpstrokeMmHg;
+    this.hiF = this.o.highFraction;
+    this.loF = this.o.lowFraction;
+    // Threshold offsets above the baseline (amplitude 0); they change only when it does.
+    this.hiDelta = this.minUp;
+    this.loDelta = 0.5 * this.minUp;
   }
 
   /** Breaths completed so far (the array grows; callers must not mutate it). */
@@ -84,10 +86,7 @@ export class BreathDetector {
   restart(t0Sec: number): void {
     this.segT0 = t0Sec;
     this.n = 0;
-    this.histPos = 0;
-    this.smoothPos = 0;
     this.smoothSum = 0;
-    this.smoothBuf.fill(0);
     this.state = IN;
     this.base = Infinity;
     this.sinceBreathN = 0;
@@ -97,24 +96,24 @@ export class BreathDetector {
   /** Feeds samples already in mmHg (or in any unit times `scale`); returns new breaths. */
   push(values: ArrayLike<number>, scale = 1): DetectedBreath[] {
     const before = this.out.length;
+    const chunkStart = this.n;
+    Object.assign(this, { chunk: values, chunkStart, scale });
     // The state lives in locals while the loop runs (it runs for every sample: fields cost
     // a load and a store each) and is stored back at the end, so chunks still join seamlessly.
-    const { o, hist, smoothBuf: sb, smoothN, holdN, decay, minExN, minInN, maxRiseN } = this;
-    let { n, histPos, smoothPos, smoothSum, sinceBreathN, state, base, amp } = this;
+    // Past samples are read from the chunk itself; only its tail is kept for the next one.
+    const { smoothN, holdN, decay, minExN, minInN, maxRiseN, minUp, hiF, loF } = this;
+    const invN = 1 / smoothN;
+    let { n, smoothSum, sinceBreathN, state, base, amp } = this;
     let { hiDelta, loDelta, lowIdx, riseIdx, fallIdx, lastHighIdx, fallMin, breathBase } = this;
     for (let k = 0; k < values.length; k++) {
       const x = values[k] * scale;
       const i = n++;
-      hist[histPos] = x;
-      if (++histPos === hist.length) histPos = 0; // wrapping, not modulo
-      smoothSum += x - sb[smoothPos];
-      sb[smoothPos] = x;
-      if (++smoothPos === smoothN) smoothPos = 0;
-      const xs = smoothSum / (i < smoothN ? i + 1 : smoothN);
+      smoothSum += x - (k >= smoothN ? values[k - smoothN] * scale : this.earlier(i - smoothN));
+      const xs = i < smoothN ? smoothSum / (i + 1) : smoothSum * invN;
       if (++sinceBreathN > holdN && amp > 0) {
         amp = amp < 1e-3 ? 0 : amp * decay; // no denormals in long gaps
-        hiDelta = hiDeltaOf(o, amp);
-        loDelta = loDeltaOf(o, amp);
+        hiDelta = Math.max(minUp, hiF * amp);
+        loDelta = Math.max(0.5 * minUp, loF * amp);
       }
       const hi = base + hiDelta;
       const lo = base + loDelta;
@@ -148,40 +147,53 @@ export class BreathDetector {
       } else {
         if (xs < fallMin) fallMin = xs;
         if (i - fallIdx < minInN) continue;
-        const etco2 = this.emit(n, histPos, riseIdx, lastHighIdx, fallIdx, breathBase);
+        const etco2 = this.emit(n, riseIdx, lastHighIdx, fallIdx, breathBase);
         amp = amp === 0 ? etco2 - breathBase : 0.6 * amp + 0.4 * (etco2 - breathBase);
-        hiDelta = hiDeltaOf(o, amp);
-        loDelta = loDeltaOf(o, amp);
+        hiDelta = Math.max(minUp, hiF * amp);
+        loDelta = Math.max(0.5 * minUp, loF * amp);
         sinceBreathN = 0;
         state = IN;
         base = fallMin;
         lowIdx = i;
       }
     }
-    Object.assign(this, { n, histPos, smoothPos, smoothSum, sinceBreathN, state, base, amp });
-    Object.assign(this, { hiDelta, loDelta, lowIdx, riseIdx, fallIdx, lastHighIdx, fallMin });
-    this.breathBase = breathBase;
+    Object.assign(this, { n, smoothSum, sinceBreathN, state, base, amp, hiDelta, loDelta });
+    Object.assign(this, { lowIdx, riseIdx, fallIdx, lastHighIdx, fallMin, breathBase });
+    this.keepTail();
     return this.out.slice(before);
+  }
+
+  /** Sample `i` of the segment (0 before its start, as the moving average begins empty). */
+  private earlier(i: number): number {
+    if (i < 0) return 0;
+    if (i >= this.chunkStart) return this.chunk[i - this.chunkStart] * this.scale;
+    return this.hist[i % this.hist.length];
+  }
+
+  /** Keeps the chunk's last samples, which the next chunk may still need. */
+  private keepTail(): void {
+    const { hist, chunk, chunkStart, scale, n } = this;
+    for (let i = Math.max(chunkStart, n - hist.length); i < n; i++)
+      hist[i % hist.length] = chunk[i - chunkStart] * scale;
+    this.chunk = [];
   }
 
   /** Records the breath that just ended; returns its EtCO2 (the mean of its plateau). */
   private emit(
     n: number,
-    histPos: number,
     riseIdx: number,
     lastHighIdx: number,
     fallIdx: number,
     breathBase: number,
   ): number {
     const fs = this.sampleRateHz;
-    const hist = this.hist;
-    const len = hist.length;
-    const oldest = Math.max(riseIdx, n - len);
+    const oldest = Math.max(riseIdx, n - this.hist.length);
     const end = Math.max(oldest, lastHighIdx - Math.round(this.o.plateauGuardSec * fs));
     const start = Math.max(oldest, end - Math.max(1, Math.round(this.o.plateauWindowSec * fs)));
+    const { hist, chunk, chunkStart, scale } = this;
     let sum = 0;
-    // Sample index k sits (n − k) places behind the write position of the ring.
-    for (let k = start; k <= end; k++) sum += hist[(histPos - (n - k) + 2 * len) % len];
+    for (let k = start; k <= end; k++)
+      sum += k >= chunkStart ? chunk[k - chunkStart] * scale : hist[k % hist.length];
     const etco2 = sum / (end - start + 1);
     this.out.push({
       tSec: this.segT0 + riseIdx / fs,
@@ -192,11 +204,6 @@ export class BreathDetector {
     return etco2;
   }
 }
-
-const hiDeltaOf = (o: DetectorOptions, amp: number) =>
-  Math.max(o.minUpstrokeMmHg, o.highFraction * amp);
-const loDeltaOf = (o: DetectorOptions, amp: number) =>
-  Math.max(0.5 * o.minUpstrokeMmHg, o.lowFraction * amp);
 
 /**
  * Detects breaths in a whole capnogram (values in mmHg, or any unit times `scale`).

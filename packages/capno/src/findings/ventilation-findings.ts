@@ -1,11 +1,34 @@
 import type { Breath, Finding, Interval } from '@upstroke/contracts';
 import { isKind } from '../events/normalize.js';
-import { median } from '../time.js';
+import { medianInPlace } from '../time.js';
 import { finding, fmt, type FindingContext } from './context.js';
 
 /** Rolling ventilation rate: breaths in the last 60 s, once they span at least 30 s (common practice). */
 export const RATE_WINDOW_SEC = 60;
 export const RATE_MIN_SPAN_SEC = 30;
+
+/**
+ * Intervals between consecutive breaths: entry k is the one ending at breath k (entry 0 is
+ * NaN), NaN where it is `maxIntervalSec` or longer or spans a data gap (`breaks`).
+ */
+export function breathIntervals(
+  breaths: readonly Breath[],
+  maxIntervalSec = Infinity,
+  breaks: readonly Interval[] = [],
+): Float64Array {
+  const out = new Float64Array(breaths.length);
+  out[0] = NaN;
+  for (let k = 1; k < breaths.length; k++) {
+    const [a, b] = [breaths[k - 1].tSec, breaths[k].tSec];
+    out[k] = b - a < maxIntervalSec && !crossesAny(breaks, a, b) ? b - a : NaN;
+  }
+  return out;
+}
+
+function crossesAny(breaks: readonly Interval[], a: number, b: number): boolean {
+  for (const g of breaks) if (g.startSec < b && g.endSec > a) return true;
+  return false;
+}
 
 /**
  * Rolling rate (breaths/min) at each breath: 60 ÷ the median interval between consecutive
@@ -20,17 +43,15 @@ export function rollingRates(
   breaks: readonly Interval[] = [],
 ): (number | null)[] {
   const out: (number | null)[] = [];
+  const intervals = breathIntervals(breaths, maxIntervalSec, breaks);
+  const window = new Float64Array(breaths.length);
   let lo = 0;
   for (let i = 0; i < breaths.length; i++) {
     const t = breaths[i].tSec;
     while (t - breaths[lo].tSec > RATE_WINDOW_SEC) lo++;
-    const intervals: number[] = [];
-    for (let k = lo + 1; k <= i; k++) {
-      const [a, b] = [breaths[k - 1].tSec, breaths[k].tSec];
-      if (b - a < maxIntervalSec && !breaks.some((g) => g.startSec < b && g.endSec > a))
-        intervals.push(b - a);
-    }
-    const m = median(intervals);
+    let n = 0;
+    for (let k = lo + 1; k <= i; k++) if (!Number.isNaN(intervals[k])) window[n++] = intervals[k];
+    const m = medianInPlace(window, n);
     out.push(t - breaths[lo].tSec >= RATE_MIN_SPAN_SEC && m ? 60 / m : null);
   }
   return out;
