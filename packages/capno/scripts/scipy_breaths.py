@@ -2,7 +2,8 @@
 """Independent breath detector for cross-checking Upstroke's engine (tests and benchmark).
 
 Reads JSON on stdin: {"values": [mmHg...], "sampleRateHz": fs, "repeat": n (optional)}.
-Prints JSON: {"breaths": [{"tSec", "etco2MmHg"}], "computeSec": median seconds per run}.
+Prints JSON: {"breaths": [{"tSec", "etco2MmHg"}], "computeSec": median seconds per run,
+"cpuSec": median CPU seconds of the process per run}.
 
 Method (SciPy only, no shared code with the TypeScript engine): smooth with a 0.1 s moving
 average; scipy.signal.find_peaks with prominence >= 3 mmHg, width >= 0.6 s at half
@@ -48,12 +49,15 @@ def main():
     fs = float(req["sampleRateHz"])
     values = np.asarray(req["values"], dtype=float)
     runs = []
+    cpu = []
     breaths = []
     for _ in range(int(req.get("repeat", 1))):
-        t0 = time.perf_counter()
+        t0, c0 = time.perf_counter(), time.process_time()
         breaths = detect(values, fs)
         runs.append(time.perf_counter() - t0)
-    json.dump({"breaths": breaths, "computeSec": float(np.median(runs))}, sys.stdout)
+        cpu.append(time.process_time() - c0)
+    out = {"breaths": breaths, "computeSec": float(np.median(runs)), "cpuSec": float(np.median(cpu))}
+    json.dump(out, sys.stdout)
 
 
 if __name__ == "__main__":

@@ -81,6 +81,7 @@ export function eventMeasures(
   const compressionSec = totalLength(intersect(tl.compressions, tl.pulseless));
   const timeWithoutCirculationSec = totalLength(tl.pulseless);
   const rhythmTimes = events.filter((e) => e.kind === 'rhythm').map((e) => e.tSec);
+  const epinephrine = epinephrineTimes(events);
   return {
     durationSec: tl.endSec,
     compressionFraction:
@@ -89,8 +90,8 @@ export function eventMeasures(
     longestPauseSec: pauses.length ? Math.max(...pauses.map((p) => p.durationSec)) : null,
     timeToFirstCompressionSec: firstOf(events, 'compressions-start')?.tSec ?? null,
     timeToFirstShockSec: firstOf(events, 'shock')?.tSec ?? null,
-    timeToFirstEpinephrineSec: epinephrineTimes(events)[0] ?? null,
-    epinephrineIntervalsSec: diffs(epinephrineTimes(events)),
+    timeToFirstEpinephrineSec: epinephrine[0] ?? null,
+    epinephrineIntervalsSec: diffs(epinephrine),
     compressionSec,
     timeWithoutCirculationSec,
     compressionIntervals: tl.compressions,

@@ -132,9 +132,9 @@ export function firstOf<K extends EventKind>(
 
 /** Times of epinephrine doses, in order. */
 export function epinephrineTimes(events: readonly TimedEvent[]): number[] {
-  return events
-    .filter((e) => isKind(e, 'drug') && e.data.drug === 'epinephrine')
-    .map((e) => e.tSec);
+  const out: number[] = [];
+  for (const e of events) if (e.kind === 'drug' && e.data.drug === 'epinephrine') out.push(e.tSec);
+  return out;
 }
 
 /**

@@ -15,6 +15,8 @@ export function findScipyPython(): string | null {
 export interface ScipyResult {
   breaths: { tSec: number; etco2MmHg: number }[];
   computeSec: number;
+  /** Median CPU time of the process per run (what a run costs, whatever the machine's load). */
+  cpuSec: number;
 }
 
 /** Runs scripts/scipy_breaths.py on a signal (mmHg) and returns its breaths. */
