@@ -1,6 +1,7 @@
-import { Controller, Get, Param, ParseIntPipe, Query } from '@nestjs/common';
+import { Controller, Get, Param, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
+import { SerialIdPipe } from '../../common/serial-id.pipe';
 import { ZodPipe } from '../../common/zod.pipe';
 import { AdminMailService } from './admin-mail.service';
 import { type Page, pageSchema } from './page';
@@ -19,7 +20,7 @@ export class AdminMailController {
   }
 
   @Get(':id')
-  get(@CurrentUser() admin: AuthUser, @Param('id', ParseIntPipe) id: number) {
+  get(@CurrentUser() admin: AuthUser, @Param('id', SerialIdPipe) id: number) {
     return this.service.message(admin, id);
   }
 }
