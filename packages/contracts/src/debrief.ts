@@ -1,7 +1,7 @@
 export * from './event-labels.js';
 import { z } from 'zod';
-import { analysisOutputSchema, etco2PointSchema } from './analysis.js';
-import { isoDateTimeSchema, uuidSchema } from './common.js';
+import { analysisOutputSchema, etco2PointSchema, etco2SourceSchema } from './analysis.js';
+import { co2UnitSchema, isoDateTimeSchema, uuidSchema } from './common.js';
 import { eventKindSchema } from './events.js';
 import { displayFormatSchema } from './formats.js';
 import { thresholdsSchema } from './profile.js';
@@ -23,6 +23,22 @@ export const debriefEventSchema = z.object({
   supersededBy: z.string().nullable(),
 });
 export type DebriefEvent = z.infer<typeof debriefEventSchema>;
+
+/**
+ * One EtCO2 value as it was entered: every typed value, and any value a correction took
+ * back (Live's Undo), which stays listed struck through, never silently absent.
+ */
+export const debriefEtco2EntrySchema = z.object({
+  id: z.string(),
+  at: isoDateTimeSchema,
+  tSec: z.number(),
+  value: z.number(),
+  unit: co2UnitSchema,
+  source: etco2SourceSchema,
+  /** Id of the correction that took the value back, if any. */
+  supersededBy: z.string().nullable(),
+});
+export type DebriefEtco2Entry = z.infer<typeof debriefEtco2EntrySchema>;
 
 export const amendmentSchema = z.object({
   id: uuidSchema,
@@ -95,6 +111,8 @@ export const debriefSchema = analysisOutputSchema.extend({
   etco2Series: z.array(etco2PointSchema),
   waveformTrace: waveformTraceSchema.nullable(),
   events: z.array(debriefEventSchema),
+  /** Typed EtCO2 values and undone values, in time order (absent from older answers). */
+  etco2Entries: z.array(debriefEtco2EntrySchema).default([]),
   amendments: z.array(amendmentSchema),
   /** What every drawing of the timeline reads (capno's `composeDebrief`). */
   timeline: timelineModelSchema,

@@ -224,4 +224,67 @@ describe('timeline model', () => {
     }).debrief;
     expect(kept.etco2Series.map((p) => p.mmHg)).toContain(80);
   });
+
+  it('lists every typed value and every undone value with the correction that took it back', () => {
+    const base = stored();
+    const typed = (id: string, sec: number, value: number, source = 'manual') => ({
+      id,
+      at: at(sec),
+      value,
+      unit: 'kPa' as const,
+      source,
+    });
+    // A stream value taken back is listed too (never silently absent); others are not.
+    const etco2 = [
+      typed('v2', 200, 10.7),
+      typed('v1', 90, 2.4),
+      typed('w1', 95, 3.1, 'stream'),
+      typed('w2', 96, 3.2, 'stream'),
+    ];
+    const events = [
+      ...base.events,
+      ev('u1', 205, 'correction', { supersedes: 'v2', reason: 'Undo' }),
+      ev('u2', 206, 'correction', { supersedes: 'w2', reason: 'Undo' }),
+    ];
+    const { debrief } = composeDebrief(stored({ events, etco2 }), {
+      record: header,
+      computedBy: 'server',
+    });
+    expect(debrief.etco2Entries).toEqual([
+      {
+        id: 'v1',
+        at: at(90),
+        tSec: 90,
+        value: 2.4,
+        unit: 'kPa',
+        source: 'manual',
+        supersededBy: null,
+      },
+      {
+        id: 'w2',
+        at: at(96),
+        tSec: 96,
+        value: 3.2,
+        unit: 'kPa',
+        source: 'stream',
+        supersededBy: 'u2',
+      },
+      {
+        id: 'v2',
+        at: at(200),
+        tSec: 200,
+        value: 10.7,
+        unit: 'kPa',
+        source: 'manual',
+        supersededBy: 'u1',
+      },
+    ]);
+    // Undoing the undo: the value stands again, no longer marked.
+    const redo = [...events, ev('u3', 300, 'correction', { supersedes: 'u1' })];
+    const again = composeDebrief(stored({ events: redo, etco2 }), {
+      record: header,
+      computedBy: 'server',
+    }).debrief;
+    expect(again.etco2Entries.find((v) => v.id === 'v2')?.supersededBy).toBeNull();
+  });
 });

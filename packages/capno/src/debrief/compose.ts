@@ -5,9 +5,12 @@ import {
   type AnalysisInput,
   type AnalysisOutput,
   type Debrief,
+  type DebriefEtco2Entry,
   type DebriefEvent,
   type DebriefProfile,
   type DebriefRecord,
+  co2UnitSchema,
+  etco2SourceSchema,
   eventKindSchema,
   type Waveform,
 } from '@upstroke/contracts';
@@ -99,6 +102,37 @@ export function debriefEvents(stored: StoredRecord): DebriefEvent[] {
 }
 
 /**
+ * Every typed EtCO2 value, and any value a correction took back, with that correction: the
+ * chart record lists them (struck through once undone). Values read off a capnogram or a
+ * monitor file are in the chart series, not listed one by one.
+ */
+export function debriefEtco2Entries(stored: StoredRecord): DebriefEtco2Entry[] {
+  const supersededBy = supersededByMap(stored.events);
+  const t0 = Date.parse(stored.arrestAt);
+  const entries = stored.etco2.flatMap((v, i): DebriefEtco2Entry[] => {
+    const by = v.id === undefined ? null : (supersededBy.get(v.id) ?? null);
+    const unit = co2UnitSchema.safeParse(v.unit);
+    const source = etco2SourceSchema.safeParse(v.source);
+    if (!unit.success || !source.success || (source.data !== 'manual' && by === null)) return [];
+    const tSec = (Date.parse(v.at) - t0) / 1000;
+    if (!Number.isFinite(tSec) || !Number.isFinite(v.value)) return [];
+    const id = v.id ?? `etco2-${i}`;
+    return [
+      {
+        id,
+        at: v.at,
+        tSec,
+        value: v.value,
+        unit: unit.data,
+        source: source.data,
+        supersededBy: by,
+      },
+    ];
+  });
+  return entries.sort((a, b) => a.tSec - b.tSec);
+}
+
+/**
  * The events as finally recorded (capno's one correction rule), on the debrief's clock: a
  * replacement takes its own time. What the event tables, the PDF and FHIR list.
  */
@@ -127,6 +161,7 @@ export function composeDebrief(
     etco2Series: series,
     waveformTrace: waveformTrace(stored.arrestAt, waveform, waveformSource(stored.waveform ?? [])),
     events,
+    etco2Entries: debriefEtco2Entries(stored),
     amendments: [...(header.amendments ?? [])],
     timeline: buildTimelineModel({
       inForce,

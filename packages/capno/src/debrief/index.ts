@@ -1,6 +1,7 @@
 export {
   analyseStored,
   composeDebrief,
+  debriefEtco2Entries,
   debriefEvents,
   debriefEventsInForce,
   type DebriefHeader,
