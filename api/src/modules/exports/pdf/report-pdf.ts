@@ -4,12 +4,12 @@ import { registerFonts } from './fonts';
 import { colors, Layout } from './layout';
 import {
   drawAmendments,
-  drawEvents,
   drawFindings,
   drawHeader,
   drawMeasures,
   drawNotesAndSignature,
 } from './sections';
+import { drawEvents } from './events-table';
 import { drawTimeline } from './timeline';
 
 export interface ReportOptions {

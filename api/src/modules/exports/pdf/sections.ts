@@ -3,8 +3,6 @@ import {
   clockFromArrest,
   confounderLabels,
   type Debrief,
-  eventDetails,
-  eventKindLabels,
   findingKindLabels,
   outcomeLabels,
   rhythmName,
@@ -102,64 +100,6 @@ export function drawFindings(l: Layout, d: Debrief): void {
     l.text(f.message, l.left + 110, l.doc.y + 1, { size: 9.5, color: colors.ink, width: textW });
     l.text(f.caution, l.left + 110, l.doc.y + 1, { size: 8, color: colors.muted, width: textW });
     l.doc.y = Math.max(l.doc.y, y + 22) + 6;
-  }
-}
-
-export function drawEvents(l: Layout, d: Debrief): void {
-  l.heading(`Events in time order (${d.events.length})`);
-  const cols = [
-    { title: 'From arrest', w: 58 },
-    { title: 'Clock', w: 52 },
-    { title: 'Event', w: 100 },
-    { title: 'Details', w: l.width - 58 - 52 - 100 - 96 },
-    { title: 'Status', w: 96 },
-  ];
-  const header = () => {
-    let x = l.left;
-    const y = l.doc.y;
-    for (const c of cols) {
-      l.text(c.title, x, y, { size: 7.5, weight: 700, color: colors.muted });
-      x += c.w;
-    }
-    l.doc.y = y + 12;
-  };
-  header();
-  const amendNo = new Map(d.amendments.map((a, i) => [a.id, i + 1]));
-  const events = [...d.events].sort((a, b) => a.tSec - b.tSec);
-  for (const e of events) {
-    const status = [
-      e.supersededBy ? 'corrected later' : '',
-      e.kind === 'correction' ? `corrects an entry` : '',
-      e.amendment ? `amendment ${amendNo.get(e.amendmentId ?? '') ?? ''}`.trim() : '',
-    ]
-      .filter(Boolean)
-      .join('; ');
-    const cells = [
-      `+${clockFromArrest(e.tSec)}`,
-      l.clock(e.at),
-      eventKindLabels[e.kind] ?? e.kind,
-      eventDetails(e.kind, e.data),
-      status,
-    ];
-    const h = Math.max(...cells.map((c, i) => l.height(c, cols[i].w - 6, 8.5))) + 3;
-    if (l.doc.y + h > l.bottom) {
-      l.ensure(h + 20);
-      header();
-    }
-    const y = l.doc.y;
-    let x = l.left;
-    cells.forEach((c, i) => {
-      const struck = e.supersededBy !== null && i < 4;
-      l.text(c, x, y, {
-        size: 8.5,
-        width: cols[i].w - 6,
-        color: struck ? colors.muted : colors.ink,
-        strike: struck,
-        weight: e.amendment && i === 4 ? 700 : 400,
-      });
-      x += cols[i].w;
-    });
-    l.doc.y = y + h;
   }
 }
 

@@ -1,8 +1,9 @@
 import type { Debrief, TimelineMarker } from '@upstroke/contracts';
+import { drawChartLegend } from './chart-legend';
 import { colors, type Layout } from './layout';
 
-const legend =
-  'CA arrest · S shock · D drug (E = epinephrine) · A airway · V ventilation · R rhythm · P pulse · ROSC · RA re-arrest · IV access · ticks: notes';
+const codes =
+  'Codes: CA arrest · S shock · D drug (E = epinephrine) · A airway · V ventilation · R rhythm · P pulse · ROSC · RA re-arrest · IV access · ticks: notes';
 
 /**
  * The record on one vector chart: EtCO2, capnogram, compressions, flagged intervals, data
@@ -79,13 +80,8 @@ export function drawTimeline(l: Layout, d: Debrief): void {
     top - lane + 4,
   );
   doc.y = top + plotH + 26;
-  l.text(
-    `Green: compressions on. Red: EtCO2 below ${low} mmHg (dashed line) for the profile's minimum time. Blue: EtCO2 rise (dashed when a confounder came before it). Light blue: ROSC. Grey: no capnogram stored (a data gap, never a finding). Dots: entered values; line: per-breath EtCO2; grey: capnogram.`,
-    l.left,
-    doc.y,
-    { size: 7.5, color: colors.muted, width: l.width },
-  );
-  l.text(legend, l.left, doc.y + 2, { size: 7.5, color: colors.muted, width: l.width });
+  drawChartLegend(l, `EtCO2 below ${low} mmHg`);
+  l.text(codes, l.left, doc.y + 2, { size: 7.5, color: colors.muted, width: l.width });
 }
 
 function drawTrace(
