@@ -12,6 +12,7 @@ const admin: Role[] = ['admin'];
 export const routeAccess: Record<string, Role[] | 'public'> = {
   'POST /api/auth/login': 'public',
   'GET /api/auth/me': everyone,
+  'POST /api/auth/logout': everyone,
   'GET /api/health': 'public',
   'POST /api/resuscitations': clinical,
   'GET /api/resuscitations': readers,

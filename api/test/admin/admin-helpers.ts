@@ -1,6 +1,6 @@
 import type { SMTPServer } from 'smtp-server';
 import { startMailSink } from '../../src/modules/mail/mail-sink';
-import { plainTextOf } from '../../src/modules/mail/mime-text';
+import { parseMessage } from '../../src/modules/mail/parse-message';
 import type { LoginResponse } from '@upstroke/contracts';
 import { freePort } from '../free-port';
 import { demoPassword, startTestApp, type TestApp } from '../test-app';
@@ -35,7 +35,9 @@ export async function startAdminTestApp(): Promise<AdminTestApp> {
         .whereRaw('? = any(rcpt_to)', [email])
         .orderBy('id', 'desc')
         .first<{ raw: string }>('raw');
-      const match = /set-password\?token=([A-Za-z0-9_-]+)/.exec(plainTextOf(row?.raw ?? ''));
+      const match = /set-password\?token=([A-Za-z0-9_-]+)/.exec(
+        (await parseMessage(row?.raw ?? '')).text,
+      );
       if (!match) throw new Error(`no set-password link for ${email}`);
       return match[1];
     },

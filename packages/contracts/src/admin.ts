@@ -180,9 +180,18 @@ export const mailSinkMessageSchema = z.object({
 });
 export type MailSinkMessage = z.infer<typeof mailSinkMessageSchema>;
 
+export const mailAttachmentSchema = z.object({
+  filename: z.string().nullable(),
+  contentType: z.string(),
+  sizeBytes: z.number().int(),
+});
+export type MailAttachment = z.infer<typeof mailAttachmentSchema>;
+
 export const mailSinkMessageDetailSchema = mailSinkMessageSchema.extend({
-  /** The plain-text body, decoded from the message's transfer encoding. */
+  /** The plain-text body, decoded from the message's transfer encoding and character set. */
   text: z.string(),
+  /** Attachments as listed in the message (name, type, decoded size); content stays stored. */
+  attachments: z.array(mailAttachmentSchema),
 });
 export type MailSinkMessageDetail = z.infer<typeof mailSinkMessageDetailSchema>;
 

@@ -1,6 +1,7 @@
 import type { Role, User } from '@upstroke/contracts';
 import { useSyncExternalStore } from 'react';
 import { authStore } from '../lib/auth-store';
+import { signOut } from '../lib/sign-out';
 
 export interface Auth {
   user: User | null;
@@ -14,7 +15,7 @@ export function useAuth(): Auth {
   const user = session?.user ?? null;
   return {
     user,
-    signOut: authStore.clear,
+    signOut,
     hasRole: (...roles) => Boolean(user && roles.includes(user.role)),
   };
 }

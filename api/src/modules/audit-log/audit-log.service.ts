@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import type { AuditEntry, AuditQuery, List } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
+import { AuditRepository } from '../audit/audit.repository';
 import { auditCsv } from './audit-csv';
 import { type AuditFilter, AuditLogRepository, type AuditRow } from './audit-log.repository';
 
@@ -17,6 +18,7 @@ export class AuditLogService {
   constructor(
     private readonly log: AuditLogRepository,
     private readonly scope: AdminScopeRepository,
+    private readonly audit: AuditRepository,
   ) {}
 
   async list(admin: AuthUser, query: AuditQuery): Promise<List<AuditEntry>> {
@@ -29,6 +31,12 @@ export class AuditLogService {
   async exportCsv(admin: AuthUser, filter: AuditFilter): Promise<string> {
     const scope = await this.scope.scopeOf(admin);
     const { items } = await this.log.list(filter, exportLimit, 0, scope);
+    await this.audit.exported(
+      admin.id,
+      'csv',
+      { entity: 'audit-log' },
+      { filter, rows: items.length },
+    );
     return auditCsv(items.map(toEntry));
   }
 

@@ -22,4 +22,25 @@ export class AuditRepository {
       details: JSON.stringify(entry.details ?? {}),
     });
   }
+
+  /**
+   * An export leaving the app (PDF, FHIR, CSV) as `export.<format>`: of one record, or of a
+   * filtered list (`entity` names the list, `details` its filter).
+   */
+  exported(
+    userId: string,
+    format: 'pdf' | 'fhir' | 'csv',
+    target: { resuscitationId: string } | { entity: string },
+    details: Record<string, unknown> = {},
+  ): Promise<void> {
+    const one = 'resuscitationId' in target ? target.resuscitationId : null;
+    return this.insert({
+      userId,
+      action: `export.${format}`,
+      entity: one ? 'resuscitation' : (target as { entity: string }).entity,
+      entityId: one,
+      resuscitationId: one,
+      details,
+    });
+  }
 }

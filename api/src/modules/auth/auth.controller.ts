@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Post, UseGuards } from '@nestjs/common';
+import { Body, Controller, Get, Headers, HttpCode, Post, UseGuards } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { type LoginRequest, loginRequestSchema, type LoginResponse } from '@upstroke/contracts';
 import { type AuthUser, CurrentUser, Public, Roles } from '../../common/auth.decorators';
@@ -15,8 +15,19 @@ export class AuthController {
   @UseGuards(SignInThrottleGuard)
   @Post('login')
   @HttpCode(200)
-  login(@Body(new ZodPipe(loginRequestSchema)) body: LoginRequest): Promise<LoginResponse> {
-    return this.auth.login(body);
+  login(
+    @Body(new ZodPipe(loginRequestSchema)) body: LoginRequest,
+    @Headers('x-device-id') deviceId?: string,
+  ): Promise<LoginResponse> {
+    return this.auth.login(body, deviceId);
+  }
+
+  @ApiBearerAuth()
+  @Roles('recorder', 'lead', 'quality', 'admin')
+  @Post('logout')
+  @HttpCode(204)
+  logout(@CurrentUser() user: AuthUser, @Headers('x-device-id') deviceId?: string): Promise<void> {
+    return this.auth.signOut(user, deviceId);
   }
 
   @ApiBearerAuth()

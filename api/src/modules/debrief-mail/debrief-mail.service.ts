@@ -17,6 +17,7 @@ import { AuditRepository } from '../audit/audit.repository';
 import { DebriefService } from '../debrief/debrief.service';
 import { ExportsService, fileName } from '../exports/exports.service';
 import { MailService } from '../mail/mail.service';
+import { SiteContextService } from '../site-context/site-context.service';
 
 const pct = formatPercent;
 
@@ -63,12 +64,14 @@ export class DebriefMailService {
     private readonly exportsService: ExportsService,
     private readonly mail: MailService,
     private readonly audit: AuditRepository,
+    private readonly sites: SiteContextService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
   async send(user: AuthUser, id: string, body: SendDebriefEmail) {
     if (user.role !== 'lead') throw forbidden('Only the lead e-mails the debrief');
     const d = await this.debrief.forUser(user, id);
+    await this.sites.assertMailDomains(d.record.siteId, body.recipients);
     const pdf = await this.exportsService.pdfOf(d);
     const link = `${this.config.publicUrl}/debrief/${id}`;
     const status = await this.mail.send({
@@ -85,7 +88,7 @@ export class DebriefMailService {
       entity: 'resuscitation',
       entityId: id,
       resuscitationId: id,
-      details: { recipients: body.recipients.length, status },
+      details: { recipients: body.recipients.length, to: body.recipients, status },
     });
     return { status };
   }

@@ -3,6 +3,7 @@ import type { Debrief } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { forbidden } from '../../common/errors';
 import { APP_CONFIG, type AppConfig } from '../../config';
+import { AuditRepository } from '../audit/audit.repository';
 import { DebriefService } from '../debrief/debrief.service';
 import { type FhirBundle, toFhirBundle } from './fhir/fhir-bundle';
 import { renderReportPdf } from './pdf/report-pdf';
@@ -17,6 +18,7 @@ import { appVersion } from './version';
 export class ExportsService {
   constructor(
     private readonly debrief: DebriefService,
+    private readonly audit: AuditRepository,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}
 
@@ -28,7 +30,10 @@ export class ExportsService {
 
   async pdf(user: AuthUser, id: string): Promise<{ file: Buffer; name: string }> {
     const d = await this.load(user, id);
-    return { file: await this.pdfOf(d), name: fileName(d, 'pdf') };
+    const file = await this.pdfOf(d);
+    const name = fileName(d, 'pdf');
+    await this.audit.exported(user.id, 'pdf', { resuscitationId: id }, { file: name });
+    return { file, name };
   }
 
   /** Renders an already loaded debrief (also used to attach it to e-mail). */
@@ -43,7 +48,14 @@ export class ExportsService {
     if (user.role !== 'lead' && user.role !== 'quality')
       throw forbidden('Only leads and the quality committee export records');
     const { debrief, waveform } = await this.debrief.withWaveform(user, id);
-    return toFhirBundle(debrief, { publicUrl: this.config.publicUrl, waveform });
+    const bundle = toFhirBundle(debrief, { publicUrl: this.config.publicUrl, waveform });
+    await this.audit.exported(
+      user.id,
+      'fhir',
+      { resuscitationId: id },
+      { status: debrief.record.status },
+    );
+    return bundle;
   }
 }
 

@@ -5,7 +5,7 @@ import { notFound } from '../../common/errors';
 import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
 import { MailSinkRepository, type SinkRow } from './mail-sink.repository';
 import { OutboxRepository } from './outbox.repository';
-import { plainTextOf } from './mime-text';
+import { parseMessage } from './parse-message';
 
 function toMessage(row: SinkRow): MailSinkMessage {
   return {
@@ -57,6 +57,16 @@ export class AdminMailService {
   async message(admin: AuthUser, id: number): Promise<MailSinkMessageDetail> {
     const row = await this.mail.findSink(await this.scope.scopeOf(admin), id);
     if (!row) throw notFound('Message');
-    return { ...toMessage(row), text: plainTextOf(row.raw) };
+    const parsed = await parseMessage(row.raw);
+    const base = toMessage(row);
+    return {
+      ...base,
+      // The message's own headers, decoded; the envelope where a header is missing.
+      subject: parsed.subject ?? base.subject,
+      from: parsed.from ?? base.from,
+      to: parsed.to.length ? parsed.to : base.to,
+      text: parsed.text,
+      attachments: parsed.attachments,
+    };
   }
 }

@@ -1,13 +1,16 @@
 import { Logger } from '@nestjs/common';
 import { SMTPServer } from 'smtp-server';
 import type { Db } from '../../db/knex';
+import { parseMessage } from './parse-message';
 
 const maxBytes = 30 * 1024 * 1024;
 
-function subjectOf(raw: string): string | null {
-  const header = raw.split(/\r?\n\r?\n/, 1)[0] ?? '';
-  const match = /^subject:\s*(.*(?:\r?\n[ \t].*)*)/im.exec(header);
-  return match ? match[1].replace(/\r?\n[ \t]/g, ' ').trim() : null;
+/** The decoded subject for the list; a message mailparser cannot read is still kept. */
+async function subjectOf(raw: string): Promise<string | null> {
+  return parseMessage(raw).then(
+    (m) => m.subject,
+    () => null,
+  );
 }
 
 /**
@@ -27,14 +30,16 @@ export function startMailSink(db: Db, port: number, host = '127.0.0.1'): Promise
       stream.on('end', () => {
         const raw = Buffer.concat(parts).toString('utf8');
         const from = session.envelope.mailFrom;
-        db('mailSinkMessages')
-          .insert({
-            mailFrom: from ? from.address : null,
-            rcptTo: session.envelope.rcptTo.map((r) => r.address),
-            subject: subjectOf(raw),
-            raw,
-            sizeBytes: Buffer.byteLength(raw),
-          })
+        subjectOf(raw)
+          .then((subject) =>
+            db('mailSinkMessages').insert({
+              mailFrom: from ? from.address : null,
+              rcptTo: session.envelope.rcptTo.map((r) => r.address),
+              subject,
+              raw,
+              sizeBytes: Buffer.byteLength(raw),
+            }),
+          )
           .then(
             () => callback(),
             (error: Error) => callback(error),

@@ -6,5 +6,6 @@ import { SiteContextService } from './site-context.service';
 @Module({
   controllers: [SiteContextController],
   providers: [SiteContextRepository, SiteContextService],
+  exports: [SiteContextService],
 })
 export class SiteContextModule {}

@@ -34,6 +34,14 @@ export class SiteContextRepository {
       .select('id', 'name', 'etco2Unit', 'locale', 'timeZone', 'clock');
   }
 
+  /** The organisation's e-mail domains set on a site (empty: any address). */
+  async mailDomains(siteId: string): Promise<string[]> {
+    const row = await this.db('sites')
+      .where({ id: siteId })
+      .first<{ mailDomains: string[] }>('mailDomains');
+    return row?.mailDomains ?? [];
+  }
+
   async unitsBySites(siteIds: string[]): Promise<UnitRow[]> {
     if (siteIds.length === 0) return [];
     return this.db<UnitRow>('units')

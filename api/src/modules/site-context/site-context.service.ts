@@ -6,6 +6,7 @@ import {
   thresholdsSchema,
 } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
+import { badRequest } from '../../common/errors';
 import { type ProfileRow, SiteContextRepository } from './site-context.repository';
 
 /** Stored thresholds over the defaults, so a profile saved before a field existed still reads. */
@@ -22,6 +23,27 @@ function profileOf(row: ProfileRow | undefined): SiteContext['profile'] {
 @Injectable()
 export class SiteContextService {
   constructor(private readonly repo: SiteContextRepository) {}
+
+  /**
+   * Refuses every recipient outside the site's e-mail domains (subdomains included), naming
+   * each address; a site with no domains set accepts any address.
+   */
+  async assertMailDomains(siteId: string, recipients: string[]): Promise<void> {
+    const domains = await this.repo.mailDomains(siteId);
+    if (domains.length === 0) return;
+    const inside = (address: string) => {
+      const host = address.slice(address.lastIndexOf('@') + 1).toLowerCase();
+      return domains.some((d) => host === d || host.endsWith(`.${d}`));
+    };
+    const details = recipients
+      .map((address, i) => ({ address, i }))
+      .filter(({ address }) => !inside(address))
+      .map(({ address, i }) => ({
+        path: `recipients.${i}`,
+        message: `${address} is outside the organisation's e-mail domains (${domains.join(', ')})`,
+      }));
+    if (details.length > 0) throw badRequest(details.map((d) => d.message).join('; '), details);
+  }
 
   /** The user's own sites only: units, EtCO2 unit, and the current protocol thresholds. */
   async forUser(user: AuthUser): Promise<RecordingContext> {

@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
+import { changesOf } from '../../common/changes';
 import {
   type CreateSite,
   defaultDisplayFormat,
@@ -103,9 +104,11 @@ export class SitesService {
       const same = await this.sites.findByName(patch.name);
       if (same && same.id !== id) throw nameTaken();
     }
+    const [before] = await this.sites.listByIds([id]);
     await this.sites.inTransaction(async (trx) => {
       await this.sites.update(id, patch, trx);
-      await this.record(admin, 'site.update', id, { ...patch }, deviceId, trx);
+      const changes = before ? changesOf(before, patch) : {};
+      await this.record(admin, 'site.update', id, { ...patch, changes }, deviceId, trx);
     });
     return this.get(admin, id);
   }

@@ -10,7 +10,6 @@ import type { Response } from 'express';
 import { Readable } from 'node:stream';
 import { type AuthUser, CurrentUser, Roles } from '../../common/auth.decorators';
 import { ZodPipe } from '../../common/zod.pipe';
-import { utsteinCsv } from './trends.csv';
 import { TrendsService } from './trends.service';
 import { UtsteinService } from './utstein.service';
 
@@ -47,12 +46,12 @@ export class TrendsController {
   }
 
   @Get('export.csv')
-  exportCsv(
+  async exportCsv(
     @CurrentUser() user: AuthUser,
     @Query(filterPipe) f: TrendsFilter,
     @Res() res: Response,
-  ): void {
-    const chunks = this.trends.exportCsv(user, f);
+  ): Promise<void> {
+    const chunks = await this.trends.exportCsv(user, f);
     res.setHeader('Content-Type', 'text/csv; charset=utf-8');
     res.setHeader('Content-Disposition', `attachment; filename="upstroke-records-${stamp()}.csv"`);
     Readable.from(chunks)
@@ -66,7 +65,7 @@ export class TrendsController {
     @Query(filterPipe) f: TrendsFilter,
     @Res() res: Response,
   ): Promise<void> {
-    const csv = utsteinCsv(await this.utstein.summary(user, f));
+    const csv = await this.utstein.csv(user, f);
     res.setHeader('Content-Type', 'text/csv; charset=utf-8');
     res.setHeader('Content-Disposition', `attachment; filename="upstroke-utstein-${stamp()}.csv"`);
     res.send(csv);

@@ -8,6 +8,7 @@ import type {
 } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { forbidden } from '../../common/errors';
+import { AuditRepository } from '../audit/audit.repository';
 import { recordCsvHeader, recordCsvLine } from './trends.csv';
 import type { ScopedFilter } from './trends.queries';
 import { type MonthRow, TrendsRepository } from './trends.repository';
@@ -30,7 +31,10 @@ const measures: Record<TrendMeasure, [keyof MonthRow, keyof MonthRow]> = {
 /** Trends for the quality committee: scoped to the caller's sites, computed in SQL. */
 @Injectable()
 export class TrendsService {
-  constructor(private readonly repo: TrendsRepository) {}
+  constructor(
+    private readonly repo: TrendsRepository,
+    private readonly audit: AuditRepository,
+  ) {}
 
   /** The caller's sites, narrowed by the filter; a site they do not belong to is refused. */
   scope(user: AuthUser, f: TrendsFilter): ScopedFilter {
@@ -98,9 +102,10 @@ export class TrendsService {
     return { items: items.map(toIsoDates), total };
   }
 
-  /** The records table as CSV, oldest first, fetched and sent a page at a time. */
-  exportCsv(user: AuthUser, f: TrendsFilter): AsyncIterable<string> {
+  /** The records table as CSV, oldest first, fetched and sent a page at a time; audited. */
+  async exportCsv(user: AuthUser, f: TrendsFilter): Promise<AsyncIterable<string>> {
     const scoped = this.scope(user, f);
+    await this.audit.exported(user.id, 'csv', { entity: 'records' }, { filter: f });
     const repo = this.repo;
     return (async function* () {
       yield recordCsvHeader();

@@ -1,6 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import type { TrendsFilter, UtsteinLine, UtsteinSummary } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
+import { AuditRepository } from '../audit/audit.repository';
+import { utsteinCsv } from './trends.csv';
 import { TrendsRepository } from './trends.repository';
 import { TrendsService } from './trends.service';
 
@@ -45,7 +47,15 @@ export class UtsteinService {
   constructor(
     private readonly trends: TrendsService,
     private readonly repo: TrendsRepository,
+    private readonly audit: AuditRepository,
   ) {}
+
+  /** The summary as CSV; audited as an export. */
+  async csv(user: AuthUser, f: TrendsFilter): Promise<string> {
+    const summary = await this.summary(user, f);
+    await this.audit.exported(user.id, 'csv', { entity: 'utstein' }, { filter: f });
+    return utsteinCsv(summary);
+  }
 
   async summary(user: AuthUser, f: TrendsFilter): Promise<UtsteinSummary> {
     const row = await this.repo.utstein(this.trends.scope(user, f));

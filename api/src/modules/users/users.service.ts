@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
 import type { AdminUser, InviteUser, List, UpdateUser } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
+import { changesOf } from '../../common/changes';
 import { conflict, forbidden, notFound } from '../../common/errors';
 import type { Db } from '../../db/knex';
 import { AdminScopeRepository, managesUser } from '../admin-scope/admin-scope.repository';
@@ -113,7 +114,11 @@ export class UsersService {
         admin,
         'user.update',
         id,
-        { ...changes, siteIds: patch.siteIds },
+        {
+          ...changes,
+          siteIds: patch.siteIds,
+          changes: changesOf(user, { ...changes, siteIds: patch.siteIds }),
+        },
         deviceId,
         trx,
       );
