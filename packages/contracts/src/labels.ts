@@ -153,6 +153,46 @@ export const mailStatusLabels: Words<'queued' | 'sent' | 'failed'> = {
   failed: 'Not sent',
 };
 
+/** What an audit entry records; an action not worded here reads with its hyphens as spaces. */
+export const auditActionLabels: Readonly<Record<string, string>> = {
+  'sign-in': 'Signed in',
+  'sign-in.failed': 'Failed sign-in',
+  'sign-out': 'Signed out',
+  create: 'Record started',
+  update: 'Record changed',
+  append: 'Entries added',
+  'discard-refused': 'Refused entries discarded',
+  import: 'Monitor file imported',
+  sign: 'Record signed',
+  amend: 'Record amended',
+  review: 'Record reviewed',
+  email: 'Debrief e-mailed',
+  'export.pdf': 'PDF exported',
+  'export.fhir': 'FHIR exported',
+  'export.csv': 'CSV exported',
+  'profile.create': 'Protocol profile saved',
+  'site.create': 'Site created',
+  'site.update': 'Site changed',
+  'unit.create': 'Unit added',
+  'unit.rename': 'Unit renamed',
+  'user.invite': 'User invited',
+  'user.update': 'User changed',
+  'user.reset-password': 'Password reset sent',
+  'user.set-password': 'Password set',
+};
+
+export const auditEntityLabels: Readonly<Record<string, string>> = {
+  resuscitation: 'Record',
+  user: 'User',
+  site: 'Site',
+  'protocol-profile': 'Protocol profile',
+  import: 'Monitor file',
+  syncItems: 'Tablet entries',
+  records: 'Records list',
+  utstein: 'Utstein summary',
+  'audit-log': 'Audit log',
+};
+
 /**
  * The word for a value from one of the tables above; "—" when there is no value. A value the
  * table does not know (an older record, a newer server) is shown with its hyphens as spaces

@@ -1,4 +1,5 @@
 import { MenuItem, Stack, TextField } from '@mui/material';
+import { auditActionLabels, auditEntityLabels, labelOf } from '@upstroke/contracts';
 import { useUsers } from '../api/list-users';
 import { type AuditFilters, useAuditVocabulary } from '../api/list-audit';
 
@@ -50,12 +51,18 @@ export function AuditFilterBar({
       {select(
         'Action',
         'action',
-        (vocabulary.data?.actions ?? []).map((a) => ({ value: a, label: a })),
+        (vocabulary.data?.actions ?? []).map((a) => ({
+          value: a,
+          label: labelOf(auditActionLabels, a),
+        })),
       )}
       {select(
         'Entity',
         'entity',
-        (vocabulary.data?.entities ?? []).map((a) => ({ value: a, label: a })),
+        (vocabulary.data?.entities ?? []).map((a) => ({
+          value: a,
+          label: labelOf(auditEntityLabels, a),
+        })),
       )}
       <TextField
         label="Record id"

@@ -1,17 +1,29 @@
 import Download from '@mui/icons-material/Download';
 import { Alert, Button, Stack } from '@mui/material';
 import { DataGrid, type GridColDef, type GridPaginationModel } from '@mui/x-data-grid';
-import type { AuditEntry } from '@upstroke/contracts';
+import {
+  type AuditEntry,
+  auditActionLabels,
+  auditEntityLabels,
+  labelOf,
+} from '@upstroke/contracts';
 import { type Formatter, useDisplayFormat } from '../../../hooks/use-display-format';
 import { useMemo, useState } from 'react';
 import { ErrorState } from '../../../components/ui/states';
 import { exportAudit } from '../api/export-audit';
 import { type AuditFilters, useAudit } from '../api/list-audit';
 import { apiErrorText } from './api-error';
-import { auditDetailsText } from './audit-details';
+import { auditDetailsText, type SiteNamer } from './audit-details';
+import { AuditEntryDialog } from './audit-entry-dialog';
+import { useSites } from '../api/list-sites';
+import { siteNames } from './site-names';
 import { AuditFilterBar } from './audit-filters';
 
-const columnsFor = (f: Formatter): GridColDef<AuditEntry>[] => [
+const columnsFor = (
+  f: Formatter,
+  sites: SiteNamer,
+  open: (e: AuditEntry) => void,
+): GridColDef<AuditEntry>[] => [
   {
     field: 'at',
     headerName: 'When',
@@ -25,22 +37,39 @@ const columnsFor = (f: Formatter): GridColDef<AuditEntry>[] => [
     minWidth: 160,
     valueGetter: (_v, r) => r.userName ?? r.userEmail ?? '—',
   },
-  { field: 'action', headerName: 'Action', width: 170 },
-  { field: 'entity', headerName: 'Entity', width: 140 },
   {
-    field: 'entityId',
-    headerName: 'Which',
-    width: 140,
-    valueGetter: (_v, r) => r.resuscitationId ?? r.entityId,
+    field: 'action',
+    headerName: 'What',
+    width: 190,
+    valueGetter: (_v, r) => labelOf(auditActionLabels, r.action),
   },
-  { field: 'deviceId', headerName: 'Device', width: 160 },
+  {
+    field: 'entity',
+    headerName: 'About',
+    width: 140,
+    valueGetter: (_v, r) => labelOf(auditEntityLabels, r.entity),
+  },
   {
     field: 'details',
     headerName: 'Details',
-    flex: 1,
-    minWidth: 200,
+    flex: 2,
+    minWidth: 240,
     sortable: false,
-    valueGetter: (_v, r) => auditDetailsText(r.action, r.details),
+    valueGetter: (_v, r) => auditDetailsText(r, sites),
+  },
+  {
+    field: 'view',
+    headerName: '',
+    width: 100,
+    sortable: false,
+    renderCell: ({ row }) => (
+      <Button
+        onClick={() => open(row)}
+        aria-label={`Details of ${labelOf(auditActionLabels, row.action)} at ${f.dateTime(row.at)}`}
+      >
+        Details
+      </Button>
+    ),
   },
 ];
 
@@ -51,8 +80,13 @@ export function AuditPanel() {
   const [filters, setFilters] = useState<AuditFilters>({});
   const [model, setModel] = useState<GridPaginationModel>({ page: 0, pageSize: 50 });
   const [exportError, setExportError] = useState<unknown>(null);
+  const [viewing, setViewing] = useState<AuditEntry | null>(null);
   const fmt = useDisplayFormat();
-  const columns = useMemo(() => columnsFor(fmt), [fmt]);
+  const siteList = useSites().data?.items;
+  const columns = useMemo(
+    () => columnsFor(fmt, (ids) => siteNames(ids, siteList), setViewing),
+    [fmt, siteList],
+  );
   // An unfinished record id is not sent: the API would answer 400.
   const sent = isUuid(filters.resuscitationId)
     ? filters
@@ -89,8 +123,16 @@ export function AuditPanel() {
           onPaginationModelChange={setModel}
           pageSizeOptions={[25, 50, 100]}
           disableRowSelectionOnClick
+          onRowClick={({ row }) => setViewing(row)}
           autoHeight
           localeText={{ noRowsLabel: 'No audit entries match these filters' }}
+        />
+      )}
+      {viewing && (
+        <AuditEntryDialog
+          entry={viewing}
+          sites={(ids) => siteNames(ids, siteList)}
+          onClose={() => setViewing(null)}
         />
       )}
     </Stack>

@@ -1,11 +1,14 @@
+import AttachFile from '@mui/icons-material/AttachFile';
 import {
   Box,
+  Chip,
   Button,
   Dialog,
   DialogActions,
   DialogContent,
   DialogTitle,
   Link,
+  Stack,
   Typography,
 } from '@mui/material';
 import { ErrorState, Loading } from '../../../components/ui/states';
@@ -33,6 +36,9 @@ function Linkified({ text }: { text: string }) {
   );
 }
 
+const sizeText = (bytes: number) =>
+  bytes < 1024 ? `${bytes} B` : `${Math.round(bytes / 1024).toLocaleString()} KB`;
+
 export function MailMessageDialog({ id, onClose }: { id: number; onClose: () => void }) {
   const message = useMailMessage(id);
   const { dateTime } = useDisplayFormat();
@@ -48,6 +54,23 @@ export function MailMessageDialog({ id, onClose }: { id: number; onClose: () => 
               To {message.data.to.join(', ')} · from {message.data.from ?? '—'} ·{' '}
               {dateTime(message.data.receivedAt)}
             </Typography>
+            {message.data.attachments.length > 0 && (
+              <Stack
+                direction="row"
+                component="ul"
+                aria-label="Attachments"
+                sx={{ flexWrap: 'wrap', gap: 1, p: 0, my: 1, listStyle: 'none' }}
+              >
+                {message.data.attachments.map((a, i) => (
+                  <li key={i}>
+                    <Chip
+                      icon={<AttachFile />}
+                      label={`${a.filename ?? 'Unnamed attachment'} · ${a.contentType} · ${sizeText(a.sizeBytes)}`}
+                    />
+                  </li>
+                ))}
+              </Stack>
+            )}
             <Linkified text={message.data.text || '(no plain-text part)'} />
           </>
         )}

@@ -7,11 +7,11 @@ import { ProfileForm } from './profile-form';
 
 const siteId = '6f1c1f0e-8a51-4d5e-9d8e-2f1c8c3c0a11';
 
-function renderForm() {
+function renderForm(onSaved: (p: { version: number }) => void = () => undefined) {
   const client = new QueryClient({ defaultOptions: { mutations: { retry: false } } });
   return render(
     <QueryClientProvider client={client}>
-      <ProfileForm siteId={siteId} basis={null} onSaved={() => undefined} />
+      <ProfileForm siteId={siteId} basis={null} onSaved={onSaved} />
     </QueryClientProvider>,
   );
 }
@@ -56,7 +56,8 @@ describe('ProfileForm', { timeout: 60_000 }, () => {
       return new Response(JSON.stringify(saved), { status: 201 });
     });
     vi.stubGlobal('fetch', fetchMock);
-    renderForm();
+    const onSaved = vi.fn();
+    renderForm(onSaved);
     const low = screen.getByRole('spinbutton', { name: 'Low EtCO2' });
     await userEvent.clear(low);
     await userEvent.type(low, '12');
@@ -68,7 +69,9 @@ describe('ProfileForm', { timeout: 60_000 }, () => {
       siteId,
       thresholds: { ...thresholdDefaults, lowEtco2MmHg: 12 },
     });
-    expect(await screen.findByText('Saved as version 2.')).toBeInTheDocument();
+    // The panel shows the confirmation (the form remounts on the new version).
+    await waitFor(() => expect(onSaved).toHaveBeenCalled());
+    expect(onSaved.mock.calls[0][0]).toMatchObject({ version: 2 });
   });
 
   it('marks a changed value and asks for a confirmation and a reason beyond 2× the default', async () => {

@@ -44,9 +44,6 @@ export function ProfileForm({
       <Stack spacing={2}>
         <ClinicalCaution text="Thresholds decide which findings the debrief shows; they never diagnose. Saving creates a new version: records keep the version in force when they began." />
         {create.isError && <Alert severity="error">{apiErrorText(create.error)}</Alert>}
-        {create.isSuccess && (
-          <Alert severity="success">Saved as version {create.data.version}.</Alert>
-        )}
         <TextField
           label="Profile name"
           {...register('name')}

@@ -1,4 +1,5 @@
 import {
+  Alert,
   List,
   ListItemButton,
   ListItemText,
@@ -23,6 +24,8 @@ export function ProfilesPanel() {
   const profiles = useProfiles(siteId);
   const { dateTime } = useDisplayFormat(siteId);
   const [chosenVersion, setVersion] = useState<string>();
+  // Kept here: saving remounts the form on the new version, which would drop its own notice.
+  const [saved, setSaved] = useState<string | null>(null);
   if (sites.isPending) return <Loading label="Loading sites…" />;
   if (sites.isError) return <ErrorState error={sites.error} onRetry={() => void sites.refetch()} />;
   if (!siteId) return <EmptyState title="No sites yet">Create a site first.</EmptyState>;
@@ -38,6 +41,7 @@ export function ProfilesPanel() {
           onChange={(e) => {
             setSite(e.target.value);
             setVersion(undefined);
+            setSaved(null);
           }}
           sx={{ maxWidth: 420 }}
         >
@@ -47,6 +51,11 @@ export function ProfilesPanel() {
             </MenuItem>
           ))}
         </TextField>
+      )}
+      {saved && (
+        <Alert severity="success" role="status" onClose={() => setSaved(null)}>
+          {saved}
+        </Alert>
       )}
       {profiles.isError && (
         <ErrorState error={profiles.error} onRetry={() => void profiles.refetch()} />
@@ -84,7 +93,12 @@ export function ProfilesPanel() {
               key={`${siteId}:${basis?.id}`}
               siteId={siteId}
               basis={basis}
-              onSaved={(p) => setVersion(p.id)}
+              onSaved={(p) => {
+                setVersion(p.id);
+                setSaved(
+                  `Saved “${p.name}” as version ${p.version}; new records use it from now on.`,
+                );
+              }}
             />
           </Paper>
         </Stack>

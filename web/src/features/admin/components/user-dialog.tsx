@@ -14,17 +14,18 @@ import {
   type AdminUser,
   type InviteUser,
   inviteUserSchema,
+  roleLabels,
   roleSchema,
   type Site,
 } from '@upstroke/contracts';
+import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { useInviteUser } from '../api/invite-user';
 import { useResetPassword } from '../api/reset-password';
 import { useUpdateUser } from '../api/update-user';
 import { apiErrorText } from './api-error';
 import { SiteCheckboxes } from './site-checkboxes';
-
-const roleLabels = { recorder: 'Recorder', lead: 'Lead', quality: 'Quality', admin: 'Admin' };
 
 interface Props {
   user: AdminUser | null;
@@ -44,6 +45,7 @@ export function UserDialog({ user, sites, onClose, onDone }: Props) {
       ? { email: user.email, name: user.name, role: user.role, siteIds: user.siteIds }
       : { email: '', name: '', role: 'recorder', siteIds: sites.length === 1 ? [sites[0].id] : [] },
   });
+  const [confirming, setConfirming] = useState(false);
   const failed = [invite, update, reset].find((m) => m.isError);
   const busy = invite.isPending || update.isPending || reset.isPending;
   const submit = handleSubmit((v) =>
@@ -127,7 +129,7 @@ export function UserDialog({ user, sites, onClose, onDone }: Props) {
               >
                 Send password reset link
               </Button>
-              <Button color="error" disabled={busy} onClick={() => setActive(false)}>
+              <Button color="error" disabled={busy} onClick={() => setConfirming(true)}>
                 Deactivate
               </Button>
             </>
@@ -143,6 +145,22 @@ export function UserDialog({ user, sites, onClose, onDone }: Props) {
           </Button>
         </DialogActions>
       </form>
+      {confirming && user && (
+        <ConfirmDialog
+          title={`Deactivate ${user.name}?`}
+          confirmLabel="Deactivate"
+          danger
+          busy={busy}
+          onCancel={() => setConfirming(false)}
+          onConfirm={() => {
+            setConfirming(false);
+            setActive(false);
+          }}
+        >
+          {user.name} ({user.email}) is signed out on every device at once and can no longer sign
+          in. Their records stay as they are. You can reactivate them later.
+        </ConfirmDialog>
+      )}
     </Dialog>
   );
 }
