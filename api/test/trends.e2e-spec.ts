@@ -159,7 +159,12 @@ describe('trends: figures, scope and exports', () => {
         shock === null ? '' : String(Math.round(shock)),
       );
       expect(cells[col('Outcome')]).not.toMatch(/-/);
+      // Sites work in mmHg or kPa: the median in both, 1 kPa = 7.50062 mmHg (definition of
+      // the mmHg, REFERENCE.md checked); the fixture's documented median is 20 mmHg = 2.67 kPa.
+      const median = cells[col('Median EtCO2 during CPR (mmHg)')];
+      expect(cells[col('Median EtCO2 during CPR (kPa)')]).toBe(median === '20' ? '2.67' : '');
     }
+    expect(header).toContain('CPR time with EtCO2 ≥ 10 mmHg (1.3 kPa) (%)');
     const u = await t
       .http()
       .get('/api/trends/utstein.csv?from=2026-01-01')

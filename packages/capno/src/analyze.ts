@@ -3,6 +3,7 @@ import type {
   AnalysisInput,
   AnalysisOutput,
   Breath,
+  Etco2DisplayUnit,
   Etco2Point,
   Interval,
   Thresholds,
@@ -33,6 +34,8 @@ export interface CoreInput {
   live?: boolean;
   /** Default adult; child and infant records use the profile's paediatric rules. */
   ageGroup?: AgeGroup;
+  /** The unit finding messages write EtCO2 in (default mmHg). */
+  displayUnit?: Etco2DisplayUnit;
   /**
    * Live refresh: only findings still running at or after this time are wanted, so rules
    * read recent EtCO2 values, breaths and pauses only (a look-back long enough for every
@@ -110,6 +113,7 @@ export function analyzeCore(core: CoreInput): AnalysisOutput {
     live: c.live ?? false,
     from,
     ageGroup: c.ageGroup ?? 'adult',
+    unit: c.displayUnit ?? 'mmHg',
   }).map((f) => ({ ...f, startSec: Math.min(f.startSec, end), endSec: Math.min(f.endSec, end) }));
   return {
     measures: {
@@ -119,7 +123,7 @@ export function analyzeCore(core: CoreInput): AnalysisOutput {
         ? ventilationRate(breaths, c.thresholds.waveformAbsentSec, monitoring.dataGaps)
         : null,
       etco2: full
-        ? etco2Measures(points, segments, tl.compressions)
+        ? etco2Measures(points, segments, tl.compressions, c.thresholds.targetEtco2MmHg)
         : { medianMmHg: null, fractionAtOrAbove10: null, fractionAtOrAbove20: null },
     },
     findings,
@@ -170,5 +174,6 @@ export function analyze(input: AnalysisInput): AnalysisOutput {
     waveformCoverage: coverage,
     endSec: recordEnd(events, points, coverage),
     ageGroup: input.ageGroup,
+    displayUnit: input.displayUnit,
   });
 }

@@ -1,7 +1,7 @@
-import type { Co2Unit } from '@upstroke/contracts';
+import { type Co2Unit, MMHG_PER_KPA } from '@upstroke/contracts';
 
-/** 1 kPa in mmHg: 1 mmHg = 133.322387415 Pa by definition (REFERENCE.md, checked). */
-export const MMHG_PER_KPA = 7.50062;
+/** 1 kPa in mmHg, defined once in contracts (`etco2-units.ts`) for the engine and every output. */
+export { MMHG_PER_KPA };
 
 /** Sea-level barometric pressure used when a % reading comes without one. */
 export const DEFAULT_BAROMETRIC_MMHG = 760;

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isoDateTimeSchema, roleSchema, uuidSchema } from './common.js';
+import { etco2DisplayUnitSchema } from './etco2-units.js';
 import { clockSchema, displayFormatSchema } from './formats.js';
 
 export * from './profile-fields.js';
@@ -67,7 +68,6 @@ export type SetPassword = z.infer<typeof setPasswordSchema>;
 
 // ── Sites and units ──────────────────────────────────────────────────────────────────────
 
-export const etco2DisplayUnitSchema = z.enum(['mmHg', 'kPa']);
 export const paperSizeSchema = z.enum(['A4', 'Letter']);
 const siteNameField = z
   .string()

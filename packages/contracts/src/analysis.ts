@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { etco2DisplayUnitSchema } from './etco2-units.js';
 import { ageGroupSchema, co2UnitSchema, isoDateTimeSchema } from './common.js';
 import { analysisEventSchema, endReasonSchema, rhythmSchema } from './events.js';
 import { profileInputSchema } from './profile.js';
@@ -39,6 +40,8 @@ export const analysisInputSchema = z.object({
   /** Default adult; child and infant records are analysed with the profile's paediatric rules. */
   ageGroup: ageGroupSchema.optional(),
   weightKg: z.number().positive().max(400).optional(),
+  /** The unit finding messages write EtCO2 in (the site's; default mmHg). Values stay mmHg. */
+  displayUnit: etco2DisplayUnitSchema.optional(),
 });
 export type AnalysisInput = z.infer<typeof analysisInputSchema>;
 
@@ -125,6 +128,9 @@ export const measuresSchema = z.object({
     medianMmHg: z.number().nullable(),
     fractionAtOrAbove10: z.number().nullable(),
     fractionAtOrAbove20: z.number().nullable(),
+    /** The profile's EtCO2 target during CPR (mmHg) and the share of CPR time at or above it. */
+    targetMmHg: z.number().optional(),
+    fractionAtOrAboveTarget: z.number().nullable().optional(),
   }),
   /** Total compression time (s) inside the time without circulation. */
   compressionSec: z.number().optional(),

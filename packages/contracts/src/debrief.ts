@@ -2,6 +2,7 @@ export * from './event-labels.js';
 import { z } from 'zod';
 import { analysisOutputSchema, etco2PointSchema, etco2SourceSchema } from './analysis.js';
 import { co2UnitSchema, isoDateTimeSchema, uuidSchema } from './common.js';
+import { etco2DisplayUnitSchema } from './etco2-units.js';
 import { eventKindSchema } from './events.js';
 import { displayFormatSchema } from './formats.js';
 import { thresholdsSchema } from './profile.js';
@@ -81,7 +82,7 @@ export const debriefRecordSchema = resuscitationSchema.extend({
   siteName: z.string(),
   unitName: z.string().nullable(),
   paperSize: z.enum(['A4', 'Letter']),
-  etco2Unit: z.enum(['mmHg', 'kPa']),
+  etco2Unit: etco2DisplayUnitSchema,
   display: displayFormatSchema,
   createdByName: z.string().nullable(),
   signedByName: z.string().nullable(),

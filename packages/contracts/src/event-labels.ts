@@ -124,9 +124,9 @@ export const measureDefinitions = {
   ventilationRate: 'Median breaths per minute from the capnogram (breath to breath).',
   etco2Median: 'Median EtCO2 during compressions, from every source (entered, streamed, imported).',
   etco2Above10:
-    'Share of compression time with EtCO2 at or above 10 mmHg (AHA 2020: below 10 suggests poor CPR).',
-  etco2Above20:
-    'Share of compression time with EtCO2 at or above 20 mmHg (target used by Meaney 2013).',
+    'Share of compression time with EtCO2 at or above 10 mmHg = 1.3 kPa (AHA 2020 adult ALS: below it suggests poor CPR).',
+  etco2AboveTarget:
+    "Share of compression time with EtCO2 at or above the site's target (protocol profile; default 20 mmHg = 2.7 kPa, Meaney 2013 CPR quality consensus).",
 } as const;
 
 /**

@@ -14,5 +14,6 @@ export * from './plausibility.js';
 export * from './live-feed.js';
 export * from './labels.js';
 export * from './formats.js';
+export * from './etco2-units.js';
 export * from './discards.js';
 export * from './spc.js';

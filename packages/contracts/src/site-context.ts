@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { etco2DisplayUnitSchema } from './etco2-units.js';
 import { isoDateTimeSchema, uuidSchema } from './common.js';
 import { displayFormatSchema } from './formats.js';
 import { thresholdsSchema } from './profile.js';
@@ -22,7 +23,7 @@ export const rosterSchema = z.array(rosterMemberSchema).max(40);
 export const siteContextSchema = z.object({
   id: uuidSchema,
   name: z.string(),
-  etco2Unit: z.enum(['mmHg', 'kPa']),
+  etco2Unit: etco2DisplayUnitSchema,
   /** How dates and times are written for this site (absent in a tablet's older cache). */
   display: displayFormatSchema.optional(),
   units: z.array(z.object({ id: uuidSchema, name: z.string() })),

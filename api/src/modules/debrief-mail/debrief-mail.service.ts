@@ -2,6 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import {
   clockFromArrest,
   type Debrief,
+  etco2MeasureRows,
   findingKindLabels,
   formatDate,
   formatDateTime,
@@ -32,7 +33,9 @@ export function summaryText(d: Debrief, link: string, message?: string): string 
     `Status: ${r.status === 'signed' ? 'signed' : 'not signed yet (draft)'}; outcome: ${r.outcome ? outcomeLabels[r.outcome] : 'not recorded'}`,
     '',
     `Duration ${clockFromArrest(m.durationSec)} · compression fraction ${pct(m.compressionFraction)} · longest pause ${m.longestPauseSec === null ? '—' : `${Math.round(m.longestPauseSec)} s`}`,
-    `EtCO2 median ${m.etco2.medianMmHg === null ? '—' : `${Math.round(m.etco2.medianMmHg)} mmHg`} · CPR time ≥ 10 mmHg ${pct(m.etco2.fractionAtOrAbove10)}`,
+    etco2MeasureRows(m.etco2, r.etco2Unit)
+      .map((row) => `${row.title} ${row.value}`)
+      .join(' · '),
     `Findings: ${d.findings.length}`,
     ...d.findings
       .slice(0, 10)

@@ -1,8 +1,10 @@
 import {
   ageGroupLabels,
   endReasonLabels,
+  etco2InUnit,
   findingKindLabels,
   findingKindSchema,
+  formatEtco2Both,
   labelOf,
   outcomeLabels,
   reviewStatusLabels,
@@ -19,6 +21,11 @@ const num = (v: unknown) =>
 /** Seconds to the whole second, mmHg to 0.1, shares as percent to 0.1 (their precision). */
 const seconds = (v: unknown) => roundTo(num(v), 0);
 const mmHg = (v: unknown) => roundTo(num(v), 1);
+/** Records span sites in either unit: the median is given in both (1 kPa = 7.50062 mmHg). */
+const kPa = (v: unknown) => {
+  const n = num(v);
+  return n === null ? null : roundTo(etco2InUnit(n, 'kPa'), 2);
+};
 const percent = (v: unknown) => {
   const n = num(v);
   return n === null ? null : roundTo(n * 100, 1);
@@ -53,8 +60,9 @@ const baseColumns: [string, (r: Row) => unknown][] = [
   ['Time to first epinephrine (s)', (r) => seconds(r.timeToFirstEpinephrineSec)],
   ['EtCO2 documented', (r) => yesNoOf(r.etco2Documented)],
   ['Median EtCO2 during CPR (mmHg)', (r) => mmHg(r.medianEtco2)],
-  ['CPR time with EtCO2 ≥ 10 mmHg (%)', (r) => percent(r.fractionGe10)],
-  ['CPR time with EtCO2 ≥ 20 mmHg (%)', (r) => percent(r.fractionGe20)],
+  ['Median EtCO2 during CPR (kPa)', (r) => kPa(r.medianEtco2)],
+  [`CPR time with EtCO2 ≥ ${formatEtco2Both(10)} (%)`, (r) => percent(r.fractionGe10)],
+  [`CPR time with EtCO2 ≥ ${formatEtco2Both(20)} (%)`, (r) => percent(r.fractionGe20)],
   ['Duration (s)', (r) => seconds(r.durationSec)],
   ['Protocol profile version', (r) => r.profileVersion],
   ['Review', (r) => labelOf(reviewStatusLabels, (r.reviewStatus as string | null) ?? 'awaiting')],

@@ -10,6 +10,7 @@ import {
   type DebriefProfile,
   type DebriefRecord,
   co2UnitSchema,
+  type Etco2DisplayUnit,
   etco2SourceSchema,
   eventKindSchema,
   type Waveform,
@@ -48,7 +49,10 @@ const isObject = (x: unknown): x is Record<string, unknown> =>
  * one that fails (stored before a schema change) is left out of the analysis, never
  * guessed at, and still listed with the record's events.
  */
-export function analyseStored(stored: StoredRecord): StoredAnalysis {
+export function analyseStored(
+  stored: StoredRecord,
+  displayUnit?: Etco2DisplayUnit,
+): StoredAnalysis {
   const profile = profileInForce(stored.profile);
   const events: AnalysisInput['events'] = [];
   for (const e of stored.events) {
@@ -74,6 +78,8 @@ export function analyseStored(stored: StoredRecord): StoredAnalysis {
     // Child and infant records are analysed with the profile's paediatric rules.
     ageGroup: stored.ageGroup ?? undefined,
     weightKg: stored.weightKg && stored.weightKg <= 400 ? stored.weightKg : undefined,
+    // Finding messages in the site's unit (values stay mmHg).
+    ...(displayUnit ? { displayUnit } : {}),
   };
   return { input, output: analyze(input), profile, waveform };
 }
@@ -149,7 +155,7 @@ export function composeDebrief(
   stored: StoredRecord,
   header: DebriefHeader,
 ): { debrief: Debrief; waveform: Waveform[] } {
-  const { input, output, profile, waveform } = analyseStored(stored);
+  const { input, output, profile, waveform } = analyseStored(stored, header.record.etco2Unit);
   const events = debriefEvents(stored);
   const series = etco2Series(stored.arrestAt, input.etco2 ?? [], output.breaths);
   const record = { ...header.record };

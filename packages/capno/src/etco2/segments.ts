@@ -50,12 +50,15 @@ function overlapFrom(xs: readonly Interval[], seg: Interval, j: number): number 
  * EtCO2 process measures over CPR time (the compression intervals):
  * - `medianMmHg`: median of the values recorded during compressions;
  * - `fractionAtOrAbove10/20`: share of the CPR time covered by a value (see MAX_HOLD_SEC)
- *   during which EtCO2 was ≥ 10 and ≥ 20 mmHg. Null when no value falls in CPR time.
+ *   during which EtCO2 was ≥ 10 and ≥ 20 mmHg. Null when no value falls in CPR time;
+ * - `fractionAtOrAboveTarget`: the same share at or above the profile's target (`targetMmHg`,
+ *   default 20 mmHg, Meaney 2013), so a site's own target drives its measure.
  */
 export function etco2Measures(
   points: readonly Etco2Point[],
   segments: readonly Etco2Segment[],
   cpr: readonly Interval[],
+  targetMmHg = 20,
 ) {
   const during: number[] = [];
   let j = 0;
@@ -66,6 +69,7 @@ export function etco2Measures(
   let covered = 0;
   let at10 = 0;
   let at20 = 0;
+  let atTarget = 0;
   j = 0;
   for (const seg of segments) {
     while (j < cpr.length && cpr[j].endSec <= seg.startSec) j++;
@@ -73,10 +77,13 @@ export function etco2Measures(
     covered += len;
     if (seg.mmHg >= 10) at10 += len;
     if (seg.mmHg >= 20) at20 += len;
+    if (seg.mmHg >= targetMmHg) atTarget += len;
   }
   return {
     medianMmHg: median(during),
     fractionAtOrAbove10: covered > 0 ? at10 / covered : null,
     fractionAtOrAbove20: covered > 0 ? at20 / covered : null,
+    targetMmHg,
+    fractionAtOrAboveTarget: covered > 0 ? atTarget / covered : null,
   };
 }

@@ -1,7 +1,7 @@
 import type { Finding, Interval } from '@upstroke/contracts';
 import { intersect } from '../events/intervals.js';
 import { isKind } from '../events/normalize.js';
-import { finding, fmt, type FindingContext } from './context.js';
+import { co2, finding, fmt, type FindingContext } from './context.js';
 
 /** Consecutive breaths with a raised inspired baseline before `rebreathing` is reported. */
 export const REBREATHING_MIN_BREATHS = 3;
@@ -60,7 +60,7 @@ export function rebreathingFindings(c: FindingContext): Finding[] {
     while (j + 1 < b.length && b[j + 1].baselineMmHg > c.t.rebreathingBaselineMmHg) j++;
     if (j - i + 1 >= REBREATHING_MIN_BREATHS) {
       const top = Math.max(...b.slice(i, j + 1).map((x) => x.baselineMmHg));
-      const msg = `Inspired CO2 stayed above ${fmt(c.t.rebreathingBaselineMmHg)} mmHg for ${j - i + 1} breaths (up to ${fmt(top)} mmHg). This suggests rebreathing; consider checking the valve, circuit and sampling line.`;
+      const msg = `Inspired CO2 stayed above ${co2(c, c.t.rebreathingBaselineMmHg)} for ${j - i + 1} breaths (up to ${co2(c, top)}). This suggests rebreathing; consider checking the valve, circuit and sampling line.`;
       out.push(
         finding('rebreathing', b[i].tSec, b[j].tSec + (b[j].durationSec ?? 0), 'warning', msg),
       );

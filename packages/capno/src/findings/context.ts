@@ -1,13 +1,15 @@
-import type {
-  AgeGroup,
-  Breath,
-  Etco2Point,
-  Finding,
-  FindingKind,
-  Interval,
-  Pause,
-  Severity,
-  Thresholds,
+import {
+  type AgeGroup,
+  type Breath,
+  type Etco2DisplayUnit,
+  type Etco2Point,
+  type Finding,
+  type FindingKind,
+  formatEtco2,
+  type Interval,
+  type Pause,
+  type Severity,
+  type Thresholds,
 } from '@upstroke/contracts';
 import type { Etco2Segment } from '../etco2/segments.js';
 import type { TimedEvent } from '../events/normalize.js';
@@ -34,6 +36,8 @@ export interface FindingContext {
   allPoints: readonly Etco2Point[];
   /** Child and infant records: rules whose evidence is adult-only are not applied. */
   ageGroup: AgeGroup;
+  /** The site's unit: messages write EtCO2 in it (values stay mmHg). */
+  unit: Etco2DisplayUnit;
 }
 
 /** Shown with every finding: Upstroke supports documentation and review, never treatment. */
@@ -41,8 +45,11 @@ export const CAUTION =
   'Decision support only, not a diagnosis: follow your local resuscitation protocol and ' +
   "clinical judgement. Thresholds are your site's settings.";
 
-/** Whole seconds or mmHg for messages. */
+/** Whole seconds (or minutes, breaths) for messages. */
 export const fmt = (x: number) => String(Math.round(x));
+
+/** An EtCO2 value or threshold (mmHg) in the site's unit for messages: "10 mmHg", "1.3 kPa". */
+export const co2 = (c: Pick<FindingContext, 'unit'>, mmHg: number) => formatEtco2(mmHg, c.unit);
 
 export function finding(
   kind: FindingKind,

@@ -3,7 +3,7 @@ import type { Etco2Point, Finding, Interval } from '@upstroke/contracts';
 import { intersect, mergeClose } from '../events/intervals.js';
 import { MAX_HOLD_SEC } from '../etco2/segments.js';
 import { median } from '../time.js';
-import { CAUTION, finding, fmt, overlaps, type FindingContext } from './context.js';
+import { CAUTION, co2, finding, fmt, overlaps, type FindingContext } from './context.js';
 
 function minIn(points: readonly Etco2Point[], iv: Interval): number {
   let m = Infinity;
@@ -22,7 +22,7 @@ export function lowFindings(c: FindingContext): Finding[] {
     const dur = iv.endSec - iv.startSec;
     if (dur < c.t.lowEtco2MinSec) continue;
     const lowest = minIn(c.points, { startSec: iv.startSec - MAX_HOLD_SEC, endSec: iv.endSec });
-    const msg = `EtCO2 stayed below ${fmt(c.t.lowEtco2MmHg)} mmHg for ${fmt(dur)} s during compressions (lowest ${fmt(lowest)} mmHg). This suggests compressions may be producing little blood flow; consider checking depth, rate and recoil, and changing the compressor.`;
+    const msg = `EtCO2 stayed below ${co2(c, c.t.lowEtco2MmHg)} for ${fmt(dur)} s during compressions (lowest ${co2(c, lowest)}). This suggests compressions may be producing little blood flow; consider checking depth, rate and recoil, and changing the compressor.`;
     out.push(finding('etco2-low', iv.startSec, iv.endSec, 'warning', msg));
   }
   return out;
@@ -52,7 +52,7 @@ function confounderAt(c: FindingContext, t: number): Finding['confounder'] {
 
 function riseFinding(c: FindingContext, s: number, e: number, base: number, peak: number) {
   const conf = confounderAt(c, s);
-  let msg = `EtCO2 rose ${fmt(peak - base)} mmHg above the preceding ${fmt(c.t.riseBaselineSec)} s (from about ${fmt(base)} to ${fmt(peak)} mmHg) and stayed up for ${fmt(e - s)} s. An abrupt sustained rise suggests return of spontaneous circulation; consider a pulse check at the next pause.`;
+  let msg = `EtCO2 rose ${co2(c, peak - base)} above the preceding ${fmt(c.t.riseBaselineSec)} s (from about ${co2(c, base)} to ${co2(c, peak)}) and stayed up for ${fmt(e - s)} s. An abrupt sustained rise suggests return of spontaneous circulation; consider a pulse check at the next pause.`;
   if (conf === 'sodium-bicarbonate')
     msg +=
       ' Sodium bicarbonate was given shortly before; it raises EtCO2 for minutes and can mimic this rise.';
@@ -112,7 +112,7 @@ export function prognosisFindings(c: FindingContext): Finding[] {
   const m = median(recent);
   if (m === null || m >= c.t.prognosisEtco2MmHg) return [];
   const rise = all.find((p) => p.tSec > at && p.mmHg >= c.t.prognosisEtco2MmHg);
-  const msg = `After ${fmt((at - cpr0) / 60)} min of CPR with an advanced airway, EtCO2 is still below ${fmt(c.t.prognosisEtco2MmHg)} mmHg (median ${fmt(m)} mmHg over the last minute). Published studies associate this with a low chance of ROSC; it is one input among several.`;
+  const msg = `After ${fmt((at - cpr0) / 60)} min of CPR with an advanced airway, EtCO2 is still below ${co2(c, c.t.prognosisEtco2MmHg)} (median ${co2(c, m)} over the last minute). Published studies associate this with a low chance of ROSC; it is one input among several.`;
   const caution = `${CAUTION} Never use EtCO2 alone to decide to stop resuscitation.`;
   return [
     finding('etco2-prognosis-caution', at, rise?.tSec ?? c.tl.endSec, 'info', msg, null, caution),

@@ -5,6 +5,7 @@ import type {
   AnalysisOutput,
   Breath,
   Co2Unit,
+  Etco2DisplayUnit,
   Etco2Point,
   Finding,
   Interval,
@@ -26,6 +27,8 @@ export interface LiveOptions {
   profile?: ProfileInput;
   /** Child and infant records use the profile's paediatric rules (default adult). */
   ageGroup?: AgeGroup;
+  /** The site's unit: prompt and finding messages write EtCO2 in it (default mmHg). */
+  displayUnit?: Etco2DisplayUnit;
 }
 
 /**
@@ -39,6 +42,7 @@ export class LiveAnalyzer {
   private readonly scale: number;
   private readonly thresholds: Thresholds;
   private readonly ageGroup: AgeGroup | undefined;
+  private readonly displayUnit: Etco2DisplayUnit | undefined;
   private readonly detector: BreathDetector;
   private started = false;
   private readonly coverage: Interval[] = [];
@@ -51,6 +55,7 @@ export class LiveAnalyzer {
     this.scale = mmHgFactor(o.unit, o.barometricMmHg);
     this.thresholds = resolveThresholds(o.profile);
     this.ageGroup = o.ageGroup;
+    this.displayUnit = o.displayUnit;
     this.detector = new BreathDetector(o.sampleRateHz);
   }
 
@@ -112,6 +117,7 @@ export class LiveAnalyzer {
       live,
       activeFrom,
       ageGroup: this.ageGroup,
+      displayUnit: this.displayUnit,
     });
   }
 

@@ -1,4 +1,9 @@
-import { clockFromArrest, type Debrief, formatPercent } from '@upstroke/contracts';
+import {
+  clockFromArrest,
+  type Debrief,
+  etco2MeasureRows,
+  formatPercent,
+} from '@upstroke/contracts';
 
 const pct = (f: number | null) => formatPercent(f);
 const dur = (s: number | null) => (s === null ? '—' : clockFromArrest(s));
@@ -31,12 +36,10 @@ export function measureRows(d: Debrief): [string, string][] {
       'Ventilation rate',
       m.ventilationRatePerMin === null ? '—' : `${Math.round(m.ventilationRatePerMin)} /min`,
     ],
-    [
-      'EtCO2 median (CPR)',
-      m.etco2.medianMmHg === null ? '—' : `${Math.round(m.etco2.medianMmHg)} mmHg`,
-    ],
-    ['CPR time EtCO2 ≥ 10 mmHg', pct(m.etco2.fractionAtOrAbove10)],
-    ['CPR time EtCO2 ≥ 20 mmHg', pct(m.etco2.fractionAtOrAbove20)],
+    ...etco2MeasureRows(m.etco2, d.record.etco2Unit).map((r): [string, string] => [
+      r.key === 'etco2Median' ? 'EtCO2 median (CPR)' : r.title,
+      r.value,
+    ]),
     ['Time to first compression', dur(m.timeToFirstCompressionSec)],
   ];
 }

@@ -1,4 +1,10 @@
-import type { Debrief, TimelineMarker } from '@upstroke/contracts';
+import {
+  type Debrief,
+  etco2Number,
+  etco2ToMmHg,
+  formatEtco2,
+  type TimelineMarker,
+} from '@upstroke/contracts';
 import { drawChartLegend } from './chart-legend';
 import { colors, type Layout } from './layout';
 
@@ -13,8 +19,11 @@ export function drawTimeline(l: Layout, d: Debrief): void {
   const doc = l.doc;
   const tl = d.timeline;
   const duration = tl.span.endSec;
+  const unit = d.record.etco2Unit;
+  // Drawn in mmHg; the axis is ruled every 10 mmHg or every 1 kPa and labelled in the site's unit.
+  const step = etco2ToMmHg(unit === 'kPa' ? 1 : 10, unit);
   const maxV = Math.max(40, ...d.etco2Series.map((p) => p.mmHg), ...(d.waveformTrace?.mmHg ?? [0]));
-  const yMax = Math.min(100, Math.ceil(maxV / 10) * 10);
+  const yMax = Math.min(100, Math.ceil(maxV / step) * step);
   const lane = 46;
   const plotH = 150;
   l.ensure(lane + plotH + 40);
@@ -31,12 +40,12 @@ export function drawTimeline(l: Layout, d: Debrief): void {
   for (const g of tl.gaps) band(g, colors.gap);
 
   doc.lineWidth(0.4).strokeColor(colors.rule);
-  for (let v = 0; v <= yMax; v += 10) {
+  for (let v = 0; v <= yMax + 1e-9; v += step) {
     doc
       .moveTo(x0, Y(v))
       .lineTo(x0 + w, Y(v))
       .stroke();
-    l.text(String(v), l.left, Y(v) - 4, {
+    l.text(etco2Number(v, unit, 0), l.left, Y(v) - 4, {
       size: 7,
       color: colors.muted,
       width: 22,
@@ -61,7 +70,7 @@ export function drawTimeline(l: Layout, d: Debrief): void {
     width: 80,
     align: 'right',
   });
-  l.text('mmHg', l.left, top - 10, { size: 7, color: colors.muted });
+  l.text(unit, l.left, top - 10, { size: 7, color: colors.muted });
 
   const low = d.profile.thresholds.lowEtco2MmHg;
   doc.lineWidth(0.8).strokeColor(colors.lowEdge).dash(3, { space: 2 });
@@ -80,7 +89,7 @@ export function drawTimeline(l: Layout, d: Debrief): void {
     top - lane + 4,
   );
   doc.y = top + plotH + 26;
-  drawChartLegend(l, `EtCO2 below ${low} mmHg`);
+  drawChartLegend(l, `EtCO2 below ${formatEtco2(low, unit)}`);
   l.text(codes, l.left, doc.y + 2, { size: 7.5, color: colors.muted, width: l.width });
 }
 

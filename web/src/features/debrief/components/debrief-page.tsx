@@ -85,7 +85,7 @@ export function DebriefPage({ importPanel }: { importPanel: ImportPanelSlot }) {
         )}
       </Section>
       <Section title="Measures">
-        <MeasureCards measures={d.measures} />
+        <MeasureCards measures={d.measures} unit={d.record.etco2Unit} />
       </Section>
       <Section title={`Findings (${d.findings.length})`}>
         <FindingsList

@@ -2,6 +2,8 @@ import HelpOutlined from '@mui/icons-material/HelpOutlineOutlined';
 import { Card, CardContent, Grid, IconButton, Stack, Tooltip, Typography } from '@mui/material';
 import {
   clockFromArrest,
+  type Etco2DisplayUnit,
+  etco2MeasureRows,
   formatPercent,
   type Measures,
   measureDefinitions,
@@ -11,7 +13,7 @@ type Key = keyof typeof measureDefinitions;
 const pct = (f: number | null) => formatPercent(f);
 const dur = (s: number | null) => (s === null ? '—' : clockFromArrest(s));
 
-function cards(m: Measures): { key: Key; title: string; value: string }[] {
+function cards(m: Measures, unit: Etco2DisplayUnit): { key: Key; title: string; value: string }[] {
   const pre = m.pauses
     .filter((p) => p.context === 'pre-shock')
     .map((p) => p.preShockSec ?? p.durationSec);
@@ -48,29 +50,15 @@ function cards(m: Measures): { key: Key; title: string; value: string }[] {
       title: 'Ventilation rate',
       value: m.ventilationRatePerMin === null ? '—' : `${Math.round(m.ventilationRatePerMin)} /min`,
     },
-    {
-      key: 'etco2Median',
-      title: 'EtCO2 median',
-      value: m.etco2.medianMmHg === null ? '—' : `${Math.round(m.etco2.medianMmHg)} mmHg`,
-    },
-    {
-      key: 'etco2Above10',
-      title: 'CPR time EtCO2 ≥ 10 mmHg',
-      value: pct(m.etco2.fractionAtOrAbove10),
-    },
-    {
-      key: 'etco2Above20',
-      title: 'CPR time EtCO2 ≥ 20 mmHg',
-      value: pct(m.etco2.fractionAtOrAbove20),
-    },
+    ...etco2MeasureRows(m.etco2, unit),
   ];
 }
 
 /** The measures the team can act on, each with its definition one tap away. */
-export function MeasureCards({ measures }: { measures: Measures }) {
+export function MeasureCards({ measures, unit }: { measures: Measures; unit: Etco2DisplayUnit }) {
   return (
     <Grid container spacing={1.5} component="section" aria-label="Measures">
-      {cards(measures).map((c) => (
+      {cards(measures, unit).map((c) => (
         <Grid key={c.key} size={{ xs: 6, sm: 4, md: 3 }}>
           <Card variant="outlined" sx={{ height: '100%' }}>
             <CardContent sx={{ py: 1.5 }}>

@@ -56,8 +56,8 @@ export function annotationsOf(
   });
   out.lowLine = {
     type: 'line',
-    yMin: m.lowMmHg,
-    yMax: m.lowMmHg,
+    yMin: m.lowLine,
+    yMax: m.lowLine,
     borderColor: '#c0392b',
     borderWidth: 1,
     borderDash: [4, 4],

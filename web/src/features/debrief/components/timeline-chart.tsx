@@ -1,5 +1,5 @@
 import { Box, Button, Stack, Typography } from '@mui/material';
-import { clockFromArrest } from '@upstroke/contracts';
+import { clockFromArrest, etco2Heading } from '@upstroke/contracts';
 import {
   Chart as ChartJS,
   type ChartData,
@@ -79,10 +79,7 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
     }),
     [model],
   );
-  const yMax = Math.min(
-    100,
-    Math.max(40, ...model.breaths.map((p) => p.y ?? 0), ...model.manual.map((p) => p.y)) + 8,
-  );
+  const yMax = model.yMax;
   const shownSpan = (view?.endSec ?? model.durationSec) - (view?.startSec ?? 0);
   const options: ChartOptions<'scatter'> = {
     animation: false,
@@ -98,7 +95,7 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
           callback: (v) => clockFromArrest(Number(v)),
         },
       },
-      y: { min: 0, max: yMax, title: { display: true, text: 'EtCO2 (mmHg)' } },
+      y: { min: 0, max: yMax, title: { display: true, text: etco2Heading(model.unit) } },
     },
     plugins: {
       legend: { position: 'bottom' },
@@ -139,7 +136,7 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
       </Box>
       <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 1 }}>
         {model.markers.length} event markers · {model.low.length} low-EtCO2 intervals shaded (below{' '}
-        {model.lowMmHg} mmHg) · {model.compressions.length} compression periods (green) ·{' '}
+        {model.lowText}) · {model.compressions.length} compression periods (green) ·{' '}
         {model.rises.length} EtCO2 rises (dashed: after a confounder) · grey: no capnogram stored.
         Markers: CA arrest, S shock, E epinephrine, D other drug, A airway, V ventilation, R rhythm,
         P pulse, ROSC, RA re-arrest, IV access, N note, ▶/■ compressions on/off. Drag or pinch to

@@ -1,4 +1,4 @@
-import type { Debrief } from '@upstroke/contracts';
+import { type Debrief, type Etco2DisplayUnit, etco2InUnit, formatEtco2 } from '@upstroke/contracts';
 
 /** Symbols for events without a shared code, that only the screen's fonts draw. */
 const screenSymbols: Record<string, string> = {
@@ -30,7 +30,14 @@ export interface TimelineModel {
   durationSec: number;
   /** Tick spacing of the whole-code view (capno's round minutes). */
   tickStepSec: number;
-  lowMmHg: number;
+  /** The site's unit: every EtCO2 value below (points, low line, axis) is in it. */
+  unit: Etco2DisplayUnit;
+  /** The low-EtCO2 threshold in `unit`, for the dashed line. */
+  lowLine: number;
+  /** The same threshold written for people ("10 mmHg", "1.3 kPa"). */
+  lowText: string;
+  /** Top of the axis (in `unit`): the largest breath or entered value, at least 40 mmHg. */
+  yMax: number;
   manual: { x: number; y: number }[];
   imported: { x: number; y: number }[];
   /** Per-breath EtCO2 and the capnogram; `y: null` breaks the line at a data gap. */
@@ -71,16 +78,19 @@ export function breakAtGaps(points: Point[], gaps: readonly Band[]): Point[] {
  * series, symbols and labels. Pure: tested without a canvas.
  */
 export function timelineModel(d: Debrief): TimelineModel {
-  const pt = (p: { tSec: number; mmHg: number }) => ({
-    x: p.tSec,
-    y: Math.round(p.mmHg * 10) / 10,
-  });
+  const unit = d.record.etco2Unit;
+  const inUnit = (mmHg: number) => Math.round(etco2InUnit(mmHg, unit) * 100) / 100;
+  const pt = (p: { tSec: number; mmHg: number }) => ({ x: p.tSec, y: inUnit(p.mmHg) });
+  const topMmHg = Math.max(40, ...d.etco2Series.map((p) => p.mmHg)) + 8;
   const tl = d.timeline;
   const ticks = tl.ticks;
   return {
     durationSec: tl.span.endSec,
     tickStepSec: ticks.length > 1 ? ticks[1].tSec - ticks[0].tSec : 60,
-    lowMmHg: d.profile.thresholds.lowEtco2MmHg,
+    unit,
+    lowLine: inUnit(d.profile.thresholds.lowEtco2MmHg),
+    lowText: formatEtco2(d.profile.thresholds.lowEtco2MmHg, unit),
+    yMax: inUnit(Math.min(100, topMmHg)),
     manual: d.etco2Series.filter((p) => p.source === 'manual').map(pt),
     imported: d.etco2Series.filter((p) => p.source === 'import').map(pt),
     breaths: breakAtGaps(
@@ -89,7 +99,7 @@ export function timelineModel(d: Debrief): TimelineModel {
     ),
     wave: d.waveformTrace
       ? breakAtGaps(
-          d.waveformTrace.tSec.map((x, i) => ({ x, y: d.waveformTrace?.mmHg[i] ?? 0 })),
+          d.waveformTrace.tSec.map((x, i) => ({ x, y: inUnit(d.waveformTrace?.mmHg[i] ?? 0) })),
           tl.gaps,
         )
       : [],

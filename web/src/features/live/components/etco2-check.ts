@@ -1,4 +1,5 @@
 import { toMmHg } from '@upstroke/capno';
+import { formatEtco2 } from '@upstroke/contracts';
 
 /** Above this, a value during CPR is unusual enough to ask "are you sure?" (common practice). */
 export const CONFIRM_ABOVE_MMHG = 60;
@@ -18,7 +19,7 @@ export function checkEtco2(text: string, unit: 'mmHg' | 'kPa'): Etco2Check {
   if (mmHg < 0 || mmHg > MAX_MMHG)
     return {
       kind: 'refuse',
-      message: `EtCO2 must be between 0 and ${unit === 'kPa' ? '20 kPa' : '150 mmHg'}`,
+      message: `EtCO2 must be between 0 and ${formatEtco2(MAX_MMHG, unit)}`,
     };
   if (mmHg > CONFIRM_ABOVE_MMHG)
     return {

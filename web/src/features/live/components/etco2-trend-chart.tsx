@@ -7,6 +7,7 @@ import {
   Tooltip,
 } from 'chart.js';
 import annotationPlugin from 'chartjs-plugin-annotation';
+import { type Etco2DisplayUnit, formatEtco2 } from '@upstroke/contracts';
 import { Line } from 'react-chartjs-2';
 
 ChartJS.register(LinearScale, CategoryScale, PointElement, LineElement, Tooltip, annotationPlugin);
@@ -15,14 +16,14 @@ ChartJS.register(LinearScale, CategoryScale, PointElement, LineElement, Tooltip,
 export function Etco2TrendChart(props: {
   points: { x: number; y: number }[];
   lowMmHg: number;
-  unit: 'mmHg' | 'kPa';
+  unit: Etco2DisplayUnit;
   scale: number;
 }) {
   const { points, scale } = props;
   return (
     <Line
       role="img"
-      aria-label={`EtCO2 trend, ${points.length} values, low band below ${Math.round(props.lowMmHg * scale * 10) / 10} ${props.unit}`}
+      aria-label={`EtCO2 trend, ${points.length} values, low band below ${formatEtco2(props.lowMmHg, props.unit)}`}
       data={{
         datasets: [
           { data: points, borderColor: '#c2410c', backgroundColor: '#c2410c', pointRadius: 3 },

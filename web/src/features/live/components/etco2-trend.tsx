@@ -1,7 +1,9 @@
 import { Box, Typography } from '@mui/material';
 import { toMmHg } from '@upstroke/capno';
+import { type Etco2DisplayUnit, etco2InUnit } from '@upstroke/contracts';
 import { lazy, memo, Suspense } from 'react';
 import type { LocalEtco2 } from '../../../lib/offline';
+import { etco2Reading } from '../lib/undo-target';
 
 const Etco2TrendChart = lazy(() =>
   import('./etco2-trend-chart').then((m) => ({ default: m.Etco2TrendChart })),
@@ -12,19 +14,19 @@ export const Etco2Trend = memo(function Etco2Trend(props: {
   arrestAt: string;
   values: LocalEtco2[];
   lowMmHg: number;
-  unit: 'mmHg' | 'kPa';
+  unit: Etco2DisplayUnit;
 }) {
   const t0 = Date.parse(props.arrestAt);
-  const scale = props.unit === 'kPa' ? 1 / toMmHg(1, 'kPa') : 1;
+  const scale = etco2InUnit(1, props.unit);
   const points = props.values.map((v) => ({
     x: (Date.parse(v.at) - t0) / 60_000,
-    y: toMmHg(v.value, v.unit) * scale,
+    y: etco2InUnit(toMmHg(v.value, v.unit), props.unit),
   }));
   const last = props.values.at(-1);
   return (
     <Box>
       <Typography variant="subtitle2">
-        EtCO2 {last ? `· last ${last.value} ${last.unit}` : '· none yet'}
+        EtCO2 {last ? `· last ${etco2Reading(last, props.unit)}` : '· none yet'}
       </Typography>
       <Box sx={{ height: 140 }}>
         <Suspense fallback={null}>

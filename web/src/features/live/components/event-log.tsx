@@ -1,6 +1,6 @@
 import { memo } from 'react';
 import { List, ListItem, ListItemText, Paper, Typography } from '@mui/material';
-import { eventLabel } from '@upstroke/contracts';
+import { type Etco2DisplayUnit, eventLabel } from '@upstroke/contracts';
 import type { LocalEtco2, LocalEvent, SyncAck } from '../../../lib/offline';
 import { formatDuration } from '../../../lib/format';
 import { etco2Label, undoneIds } from '../lib/undo-target';
@@ -15,10 +15,10 @@ interface Row {
 }
 
 /** Every entry with its words; a correction names the entry it took back. */
-function logRows(events: LocalEvent[], etco2: LocalEtco2[]): Row[] {
+function logRows(events: LocalEvent[], etco2: LocalEtco2[], unit?: Etco2DisplayUnit): Row[] {
   const labels = new Map<string, string>();
   for (const e of events) labels.set(e.id, eventLabel(e.kind, e.data));
-  for (const v of etco2) labels.set(v.id, etco2Label(v));
+  for (const v of etco2) labels.set(v.id, etco2Label(v, unit));
   const text = (e: LocalEvent) => {
     if (e.kind !== 'correction') return labels.get(e.id) ?? e.kind;
     const undid = labels.get(String((e.data as { supersedes?: string }).supersedes));
@@ -51,10 +51,12 @@ export const EventLog = memo(function EventLog(props: {
   events: LocalEvent[];
   etco2: LocalEtco2[];
   acks: ReadonlyMap<string, SyncAck>;
+  /** The site's unit (values from the monitor link are converted to it). */
+  unit?: Etco2DisplayUnit;
 }) {
   const t0 = Date.parse(props.arrestAt);
   const undone = undoneIds(props.events);
-  const rows = logRows(props.events, props.etco2)
+  const rows = logRows(props.events, props.etco2, props.unit)
     .sort((a, b) => b.at.localeCompare(a.at))
     .slice(0, SHOWN);
   return (

@@ -1,5 +1,5 @@
 import { Box, Stack } from '@mui/material';
-import type { Thresholds } from '@upstroke/contracts';
+import type { Etco2DisplayUnit, Thresholds } from '@upstroke/contracts';
 import { type ComponentType, memo, useCallback, useDeferredValue, useMemo, useState } from 'react';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 import type { LocalEtco2, LocalEvent, LocalResuscitation } from '../../../lib/offline';
@@ -36,6 +36,8 @@ export type LiveData = Pick<ReturnType<typeof useLiveRecord>, 'events' | 'etco2'
 export type MonitorSlot = ComponentType<{
   resuscitationId: string;
   arrestAt: string;
+  /** The site's unit: readings and messages are written in it. */
+  unit: Etco2DisplayUnit;
   onEtco2: (mmHg: number, at: string) => void;
 }>;
 
@@ -54,7 +56,10 @@ export function LiveScreen({
     const undone = undoneIds(events);
     return undone.size ? etco2.filter((v) => !undone.has(v.id)) : etco2;
   }, [events, etco2]);
-  const target = useMemo(() => undoTarget(state.inForce, events, etco2), [state, events, etco2]);
+  const target = useMemo(
+    () => undoTarget(state.inForce, events, etco2, etco2Unit),
+    [state, events, etco2, etco2Unit],
+  );
   const actions = useLiveActions(record.id, record.arrestAt, state, target, etco2Unit);
   // The log and the analysis redraw at low priority; the clocks tick inside the parts that
   // show them; everything else is memoised, so a tap redraws only what it changed.
@@ -104,6 +109,7 @@ export function LiveScreen({
             events={laterEvents}
             etco2={laterKept}
             thresholds={thresholds}
+            unit={etco2Unit}
           />
           <ActionGrid
             phase={state.phase}
@@ -125,6 +131,7 @@ export function LiveScreen({
           <Monitor
             resuscitationId={record.id}
             arrestAt={record.arrestAt}
+            unit={etco2Unit}
             onEtco2={actions.etco2At}
           />
           <Metronome paused={state.phase !== 'pulseless'} />
@@ -133,6 +140,7 @@ export function LiveScreen({
             events={laterEvents}
             etco2={laterEtco2}
             acks={acks}
+            unit={etco2Unit}
           />
           <CausesChecklist ticked={ticked} onNote={actions.note} />
         </Stack>
@@ -178,6 +186,7 @@ const LivePrompts = memo(function LivePrompts(props: {
   events: LocalEvent[];
   etco2: LocalEtco2[];
   thresholds: Thresholds;
+  unit: Etco2DisplayUnit;
 }) {
   const now = useNow(1000);
   const prompts = usePrompts({ ...props, now });

@@ -1,5 +1,5 @@
 import { LiveAnalyzer } from '@upstroke/capno';
-import type { AnalysisEvent, Thresholds } from '@upstroke/contracts';
+import type { AnalysisEvent, Etco2DisplayUnit, Thresholds } from '@upstroke/contracts';
 import { useMemo } from 'react';
 import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
 import type { LiveState } from '../lib/live-state';
@@ -20,19 +20,27 @@ export function usePrompts(input: {
   events: LocalEvent[];
   etco2: LocalEtco2[];
   thresholds: Thresholds;
+  /** The site's unit: the engine's prompts write EtCO2 in it. */
+  unit: Etco2DisplayUnit;
   state: LiveState;
   now: number;
 }): Prompt[] {
-  const { arrestAt, events, etco2, thresholds: t, state } = input;
+  const { arrestAt, events, etco2, thresholds: t, state, unit } = input;
   const second = Math.floor(input.now / 1000);
   const analyzer = useMemo(() => {
-    const a = new LiveAnalyzer({ arrestAt, sampleRateHz: 50, unit: 'mmHg', profile: t });
+    const a = new LiveAnalyzer({
+      arrestAt,
+      sampleRateHz: 50,
+      unit: 'mmHg',
+      profile: t,
+      displayUnit: unit,
+    });
     for (const e of events)
       a.pushEvent({ id: e.id, at: e.at, kind: e.kind, data: e.data } as AnalysisEvent);
     for (const v of etco2)
       a.pushEtco2({ at: v.at, value: v.value, unit: v.unit, source: v.source });
     return a;
-  }, [arrestAt, events, etco2, t]);
+  }, [arrestAt, events, etco2, t, unit]);
   return useMemo(() => {
     const arrestAtMs = Date.parse(arrestAt);
     const engine: Prompt[] =

@@ -1,5 +1,5 @@
-import { supersededIds } from '@upstroke/capno';
-import { eventLabel } from '@upstroke/contracts';
+import { supersededIds, toMmHg } from '@upstroke/capno';
+import { type Etco2DisplayUnit, eventLabel, formatEtco2 } from '@upstroke/contracts';
 import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
 
 /** The entry Undo takes back: the newest tap still in force, event or typed EtCO2 value. */
@@ -10,8 +10,24 @@ export interface UndoTarget {
   label: string;
 }
 
-export function etco2Label(v: Pick<LocalEtco2, 'value' | 'unit'>): string {
-  return `EtCO2 ${v.value} ${v.unit}`;
+/**
+ * "18 mmHg": a value typed in the site's unit as typed; any other (a monitor link's mmHg on
+ * a kPa site) converted to the site's unit, so Live reads in one unit.
+ */
+export function etco2Reading(
+  v: Pick<LocalEtco2, 'value' | 'unit'>,
+  siteUnit: Etco2DisplayUnit = 'mmHg',
+): string {
+  if (v.unit === siteUnit) return `${v.value} ${v.unit}`;
+  return formatEtco2(toMmHg(v.value, v.unit), siteUnit);
+}
+
+/** What the log and Undo call a value ("EtCO2 18 mmHg"). */
+export function etco2Label(
+  v: Pick<LocalEtco2, 'value' | 'unit'>,
+  siteUnit: Etco2DisplayUnit = 'mmHg',
+): string {
+  return `EtCO2 ${etco2Reading(v, siteUnit)}`;
 }
 
 /**
@@ -23,6 +39,7 @@ export function undoTarget(
   inForce: readonly LocalEvent[],
   events: readonly LocalEvent[],
   etco2: readonly LocalEtco2[],
+  siteUnit: Etco2DisplayUnit = 'mmHg',
 ): UndoTarget | null {
   const gone = supersededIds(events);
   let value: LocalEtco2 | undefined;
@@ -30,7 +47,7 @@ export function undoTarget(
     if (v.source === 'manual' && !gone.has(v.id) && (!value || v.at > value.at)) value = v;
   const event = inForce.at(-1);
   if (value && (!event || Date.parse(value.at) > Date.parse(event.at)))
-    return { id: value.id, at: value.at, label: etco2Label(value) };
+    return { id: value.id, at: value.at, label: etco2Label(value, siteUnit) };
   return event ? { id: event.id, at: event.at, label: eventLabel(event.kind, event.data) } : null;
 }
 

@@ -1,3 +1,4 @@
+import { type Etco2DisplayUnit, etco2Number, formatEtco2 } from '@upstroke/contracts';
 import { memo } from 'react';
 import { Alert, Button, Chip, Paper, Stack, Typography } from '@mui/material';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
@@ -9,6 +10,8 @@ import { LinkSettings } from './link-settings';
 export interface MonitorPanelProps {
   resuscitationId: string;
   arrestAt: string;
+  /** The site's unit: readings and messages are written in it. */
+  unit: Etco2DisplayUnit;
   onEtco2?: (mmHg: number, at: string) => void;
 }
 
@@ -64,13 +67,17 @@ export const MonitorPanel = memo(function MonitorPanel(props: MonitorPanelProps)
           <>
             <CapnogramCanvas ring={ring} />
             <Stack direction="row" spacing={3} sx={{ alignItems: 'baseline' }}>
-              <Reading label="EtCO2" value={view.etco2MmHg} unit="mmHg" />
+              <Reading
+                label="EtCO2"
+                value={view.etco2MmHg === null ? null : etco2Number(view.etco2MmHg, props.unit)}
+                unit={props.unit}
+              />
               <Reading label="Ventilation rate" value={view.ratePerMin} unit="/min" />
               <Typography variant="body2" color="text.secondary" aria-label="Link gaps">
                 {view.gaps === 0 ? 'No gaps' : `${view.gaps} frame(s) missed`}
               </Typography>
             </Stack>
-            <ValueAge view={view} />
+            <ValueAge view={view} unit={props.unit} />
             {view.findings.map((f) => (
               <Alert
                 key={f.kind}
@@ -103,11 +110,11 @@ export const MonitorPanel = memo(function MonitorPanel(props: MonitorPanelProps)
 });
 
 /** How old the newest value is; once stale, the value is shown only as past. */
-function ValueAge({ view }: { view: MonitorView }) {
+function ValueAge({ view, unit }: { view: MonitorView; unit: Etco2DisplayUnit }) {
   if (view.etco2AgeSec === null) return null;
   const text =
     view.staleEtco2MmHg !== null
-      ? `No current value: the last, ${view.staleEtco2MmHg} mmHg, is ${view.etco2AgeSec} s old`
+      ? `No current value: the last, ${formatEtco2(view.staleEtco2MmHg, unit)}, is ${view.etco2AgeSec} s old`
       : `Last value ${view.etco2AgeSec} s ago`;
   return (
     <Typography
@@ -120,7 +127,8 @@ function ValueAge({ view }: { view: MonitorView }) {
   );
 }
 
-function Reading({ label, value, unit }: { label: string; value: number | null; unit: string }) {
+function Reading(props: { label: string; value: number | string | null; unit: string }) {
+  const { label, value, unit } = props;
   return (
     <Stack>
       <Typography variant="caption" color="text.secondary">

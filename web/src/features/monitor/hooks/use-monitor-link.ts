@@ -1,5 +1,5 @@
 import { LiveAnalyzer, ventilationRate } from '@upstroke/capno';
-import type { Finding, LinkHello } from '@upstroke/contracts';
+import type { Etco2DisplayUnit, Finding, LinkHello } from '@upstroke/contracts';
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { queueWaveformChunk } from '../../../lib/offline';
 import { type LinkStatus, MonitorLinkClient } from '../lib/link-client';
@@ -57,6 +57,8 @@ interface Session {
 export function useMonitorLink(o: {
   resuscitationId: string;
   arrestAt: string;
+  /** The site's unit: the panel's finding messages write EtCO2 in it. */
+  unit?: Etco2DisplayUnit;
   onEtco2?: (mmHg: number, at: string) => void;
 }) {
   const [view, setView] = useState<MonitorView>(idle);
@@ -73,7 +75,7 @@ export function useMonitorLink(o: {
     const a = s?.analyzer;
     const breaths = a?.breaths ?? [];
     const last = breaths[breaths.length - 1];
-    const value = last ? Math.round(last.etco2MmHg) : null;
+    const value = last ? Math.round(last.etco2MmHg * 10) / 10 : null;
     const age = s?.breathAtMs != null ? (Date.now() - s.breathAtMs) / 1000 : null;
     const stale = age !== null && age > STALE_AFTER_SEC;
     setView((v) => ({
@@ -117,6 +119,7 @@ export function useMonitorLink(o: {
               arrestAt: latest.current.arrestAt,
               sampleRateHz: h.sampleRateHz,
               unit: h.unit,
+              displayUnit: latest.current.unit,
             });
             ring.current = new DisplayRing(h.sampleRateHz);
           }

@@ -1,6 +1,7 @@
 import { Link } from '@mui/material';
 import { DataGrid, type GridColDef, type GridSortModel } from '@mui/x-data-grid';
 import {
+  formatEtco2Both,
   formatPercent,
   labelOf,
   outcomeLabels,
@@ -50,7 +51,12 @@ const columnsFor = (f: Formatter): GridColDef<TrendsRecord>[] => [
     width: 170,
     valueFormatter: pct,
   },
-  { field: 'fractionGe10', headerName: 'CPR time EtCO2 ≥ 10', width: 160, valueFormatter: pct },
+  {
+    field: 'fractionGe10',
+    headerName: `CPR time EtCO2 ≥ ${formatEtco2Both(10)}`,
+    width: 160,
+    valueFormatter: pct,
+  },
   { field: 'timeToFirstShockSec', headerName: 'First shock', width: 110, valueFormatter: sec },
   {
     field: 'timeToFirstEpinephrineSec',

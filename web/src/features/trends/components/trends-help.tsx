@@ -1,3 +1,4 @@
+import { formatEtco2Both } from '@upstroke/contracts';
 import { Accordion, AccordionDetails, AccordionSummary, Typography } from '@mui/material';
 
 /** How every figure on the page is computed (the definitions the tests check). */
@@ -27,7 +28,10 @@ export function TrendsHelp() {
             Compression fraction: compression time ÷ time without circulation (arrest to first ROSC
             or end).
           </li>
-          <li>% of CPR time with EtCO2 ≥ 10 mmHg: per record, then the median across records.</li>
+          <li>
+            % of CPR time with EtCO2 ≥ {formatEtco2Both(10)}: per record, then the median across
+            records.
+          </li>
           <li>
             Time to first shock: records with a shockable first rhythm (VF, pVT). Time to first
             epinephrine: non-shockable first rhythm.

@@ -1,5 +1,5 @@
 import { Box, Button, GlobalStyles, Stack, Typography } from '@mui/material';
-import type { TrendsFilter, TrendsResponse } from '@upstroke/contracts';
+import { formatEtco2Both, type TrendsFilter, type TrendsResponse } from '@upstroke/contracts';
 import { useState } from 'react';
 import { ErrorState, Loading, PageHeader } from '../../../components/ui/states';
 import { downloadCsv } from '../api/download-csv';
@@ -28,7 +28,7 @@ function chartSpecs(t: TrendsResponse): ChartSpec[] {
       target: null,
     },
     {
-      title: 'Median % of CPR time with EtCO2 ≥ 10 mmHg',
+      title: `Median % of CPR time with EtCO2 ≥ ${formatEtco2Both(10)}`,
       scale: 100,
       unit: '%',
       points: s.fractionGe10,
