@@ -68,8 +68,10 @@ describe('EtCO2 in the site unit', () => {
     for (const f of d.findings) expect(pdf).toContain(squash(f.message));
     expect(pdf).toContain(squash('CPR time EtCO2 ≥ 1.3 kPa'));
     expect(pdf).toContain(squash('CPR time EtCO2 ≥ target 2.7 kPa'));
-    expect(pdf).toContain(squash('Red: EtCO2 below 1.3 kPa (dashed line)'));
-    expect(pdf).not.toMatch(/mmHg/);
+    expect(pdf).toContain(squash('EtCO2 below 1.3 kPa'));
+    // Values recorded in mmHg are listed in kPa, with the unit they came in beside them.
+    expect(pdf).toContain(squash('0.7 kPa (recorded as 5 mmHg) (typed)'));
+    expect(pdf.replace(/\(recordedas[\d.]+mmHg\)/g, '')).not.toMatch(/mmHg/);
     const mail = summaryText(d, 'http://localhost/debrief/x');
     // Six of the ten values during compressions are 5 mmHg, so the median is 5 mmHg = 0.7 kPa.
     expect(mail).toContain('EtCO2 median 0.7 kPa');

@@ -6,6 +6,7 @@ import {
   etco2ToMmHg,
   formatEtco2,
   formatEtco2Both,
+  formatEtco2Reading,
   MMHG_PER_KPA,
 } from './etco2-units.js';
 
@@ -30,6 +31,13 @@ describe('EtCO2 in the site unit', () => {
     expect(formatEtco2(Number.NaN, 'mmHg')).toBe('—');
     expect(etco2Number(30, 'kPa', 0)).toBe('4');
     expect(formatEtco2Both(10)).toBe('10 mmHg (1.3 kPa)');
+    // 15 mmHg = 2.0 kPa (1 kPa = 7.50062 mmHg, definition of the mmHg).
+    expect(formatEtco2Reading({ value: 15, unit: 'mmHg' }, 'kPa')).toBe('2.0 kPa');
+    expect(formatEtco2Reading({ value: 15, unit: 'mmHg' }, 'kPa', { showRecorded: true })).toBe(
+      '2.0 kPa (recorded as 15 mmHg)',
+    );
+    expect(formatEtco2Reading({ value: 2.65, unit: 'kPa' }, 'kPa')).toBe('2.65 kPa');
+    expect(formatEtco2Reading({ value: 2, unit: 'kPa' }, 'mmHg')).toBe('15 mmHg');
   });
 
   it('words the measures in the unit, with the profile target', () => {

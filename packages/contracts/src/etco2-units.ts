@@ -56,6 +56,23 @@ export function formatEtco2(
 }
 
 /**
+ * A recorded reading (value and the unit it came in) for a site: as recorded when the units
+ * agree, else in the site's unit; `showRecorded` adds the original ("2.0 kPa (recorded as
+ * 15 mmHg)") where the record itself is shown. A % reading needs its barometric pressure to
+ * convert, which the entry does not carry, so it is shown as recorded.
+ */
+export function formatEtco2Reading(
+  v: { value: number; unit: 'mmHg' | 'kPa' | '%' },
+  siteUnit: Etco2DisplayUnit,
+  opts: { showRecorded?: boolean } = {},
+): string {
+  const recorded = `${v.value} ${v.unit}`;
+  if (v.unit === siteUnit || v.unit === '%') return recorded;
+  const shown = formatEtco2(etco2ToMmHg(v.value, v.unit), siteUnit);
+  return opts.showRecorded ? `${shown} (recorded as ${recorded})` : shown;
+}
+
+/**
  * Both units, mmHg first ("10 mmHg (1.3 kPa)"), for outputs that span sites with different
  * units (the committee's trends and CSV), where one site's unit cannot be chosen.
  */

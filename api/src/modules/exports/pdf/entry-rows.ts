@@ -1,9 +1,11 @@
 import {
   type Debrief,
   type DebriefEtco2Entry,
+  type Etco2DisplayUnit,
   eventDetails,
   eventKindLabels,
   eventLabel,
+  formatEtco2Reading,
 } from '@upstroke/contracts';
 
 /** One line of the chart record's entry table: an event or a typed EtCO2 value. */
@@ -34,7 +36,9 @@ function targetLabel(kind: string, data: Record<string, unknown>): string {
   return `Note: ${data.text.length > 60 ? `${data.text.slice(0, 59)}…` : data.text}`;
 }
 
-const valueLabel = (v: { value: number; unit: string }) => `EtCO2 ${v.value} ${v.unit}`;
+/** A value in the site's unit, with the unit it was recorded in when that differs. */
+const reading = (v: DebriefEtco2Entry, unit: Etco2DisplayUnit) =>
+  formatEtco2Reading(v, unit, { showRecorded: true });
 
 /**
  * Every event and every typed EtCO2 value of the record, in time order, as the chart record
@@ -44,10 +48,11 @@ const valueLabel = (v: { value: number; unit: string }) => `EtCO2 ${v.value} ${v
 export function entryRows(
   d: Pick<Debrief, 'events' | 'etco2Entries' | 'amendments'>,
   clock: (iso: string) => string,
+  unit: Etco2DisplayUnit = 'mmHg',
 ): EntryRow[] {
   const labels = new Map<string, string>([
     ...d.events.map((e) => [e.id, targetLabel(e.kind, e.data)] as const),
-    ...d.etco2Entries.map((v) => [v.id, valueLabel(v)] as const),
+    ...d.etco2Entries.map((v) => [v.id, `EtCO2 ${reading(v, unit)}`] as const),
   ]);
   const replaces = new Set(
     d.events
@@ -72,7 +77,7 @@ export function entryRows(
     struck: e.supersededBy !== null,
     amendment: e.amendment,
   }));
-  for (const v of d.etco2Entries) rows.push(valueRow(v, statusOf(v.supersededBy)));
+  for (const v of d.etco2Entries) rows.push(valueRow(v, statusOf(v.supersededBy), unit));
   return rows
     .map((r, i) => ({ r, i }))
     .sort((a, b) => a.r.tSec - b.r.tSec || a.i - b.i)
@@ -82,13 +87,13 @@ export function entryRows(
 const amendmentStatus = (numbers: ReadonlyMap<string, number>, id: string | null) =>
   `amendment ${numbers.get(id ?? '') ?? ''}`.trim();
 
-function valueRow(v: DebriefEtco2Entry, status: string): EntryRow {
+function valueRow(v: DebriefEtco2Entry, status: string, unit: Etco2DisplayUnit): EntryRow {
   return {
     id: v.id,
     tSec: v.tSec,
     at: v.at,
     what: 'EtCO2',
-    details: `${v.value} ${v.unit}${v.source === 'manual' ? ' (typed)' : ''}`,
+    details: `${reading(v, unit)}${v.source === 'manual' ? ' (typed)' : ''}`,
     status,
     struck: v.supersededBy !== null,
     amendment: false,

@@ -7,7 +7,7 @@ import { colors, type Layout } from './layout';
  * replaced or Undo took back is printed struck through with its status, never left out.
  */
 export function drawEvents(l: Layout, d: Debrief): void {
-  const rows = entryRows(d, (iso) => l.clock(iso));
+  const rows = entryRows(d, (iso) => l.clock(iso), d.record.etco2Unit);
   const values = d.etco2Entries.length;
   l.heading(
     `Entries in time order (${d.events.length} events${values ? `, ${values} typed EtCO2 values` : ''})`,

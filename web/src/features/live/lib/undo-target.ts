@@ -1,5 +1,5 @@
-import { supersededIds, toMmHg } from '@upstroke/capno';
-import { type Etco2DisplayUnit, eventLabel, formatEtco2 } from '@upstroke/contracts';
+import { supersededIds } from '@upstroke/capno';
+import { type Etco2DisplayUnit, eventLabel, formatEtco2Reading } from '@upstroke/contracts';
 import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
 
 /** The entry Undo takes back: the newest tap still in force, event or typed EtCO2 value. */
@@ -18,8 +18,7 @@ export function etco2Reading(
   v: Pick<LocalEtco2, 'value' | 'unit'>,
   siteUnit: Etco2DisplayUnit = 'mmHg',
 ): string {
-  if (v.unit === siteUnit) return `${v.value} ${v.unit}`;
-  return formatEtco2(toMmHg(v.value, v.unit), siteUnit);
+  return formatEtco2Reading(v, siteUnit);
 }
 
 /** What the log and Undo call a value ("EtCO2 18 mmHg"). */
