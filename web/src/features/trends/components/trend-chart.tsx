@@ -1,5 +1,5 @@
-import { Box, Card, CardContent, Typography } from '@mui/material';
-import type { TrendPoint } from '@upstroke/contracts';
+import { Box, Card, CardContent, Stack, Typography } from '@mui/material';
+import type { SpcMeasure, TrendPoint, TrendsFilter } from '@upstroke/contracts';
 import {
   CategoryScale,
   Chart as ChartJS,
@@ -10,7 +10,10 @@ import {
   Tooltip,
 } from 'chart.js';
 import annotationPlugin from 'chartjs-plugin-annotation';
+import { useState } from 'react';
 import { Line } from 'react-chartjs-2';
+import { type ChartView, ChartViewToggle } from './spc/chart-view-toggle';
+import { ControlChartView } from './spc/control-chart-view';
 
 ChartJS.register(
   CategoryScale,
@@ -29,10 +32,22 @@ export interface ChartSpec {
   unit: string;
   points: TrendPoint[];
   target: number | null;
+  /** Control charts this card can switch to (none: the line only). */
+  spc?: SpcMeasure[];
 }
 
 /** One monthly series; the x axis names each month with its n, the dashed line is the target. */
-export function TrendChart({ title, scale, unit, points, target }: ChartSpec) {
+export function TrendChart({
+  title,
+  scale,
+  unit,
+  points,
+  target,
+  spc,
+  filter = {},
+}: ChartSpec & { filter?: TrendsFilter }) {
+  const [view, setView] = useState<ChartView>('line');
+  const control = view === 'control' && Boolean(spc?.length);
   const labels = points.map((p) => `${p.month} (n=${p.n})`);
   const values = points.map((p) =>
     p.value === null ? null : Math.round(p.value * scale * 10) / 10,
@@ -43,13 +58,17 @@ export function TrendChart({ title, scale, unit, points, target }: ChartSpec) {
   return (
     <Card variant="outlined">
       <CardContent>
-        <Typography variant="h3" component="h3" gutterBottom>
-          {title}
-        </Typography>
+        <Stack direction="row" sx={{ justifyContent: 'space-between', flexWrap: 'wrap', gap: 1 }}>
+          <Typography variant="h3" component="h3" gutterBottom>
+            {title}
+          </Typography>
+          {spc?.length ? <ChartViewToggle title={title} value={view} onChange={setView} /> : null}
+        </Stack>
+        {control && spc ? <ControlChartView measures={spc} filter={filter} /> : null}
         <Box
           role="img"
           aria-label={`${title}. ${summary || 'No records in this period.'}`}
-          sx={{ height: 220 }}
+          sx={{ height: 220, display: control ? 'none' : undefined }}
         >
           <Line
             data={{

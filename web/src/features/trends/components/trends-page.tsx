@@ -5,6 +5,7 @@ import { ErrorState, Loading, PageHeader } from '../../../components/ui/states';
 import { downloadCsv } from '../api/download-csv';
 import { useTrends } from '../api/get-trends';
 import { RecordsGrid } from './records-grid';
+import { FunnelSection } from './spc/funnel-section';
 import { type ChartSpec, TrendChart } from './trend-chart';
 import { TrendsFilters } from './trends-filters';
 import { TrendsHelp } from './trends-help';
@@ -15,6 +16,7 @@ function chartSpecs(t: TrendsResponse): ChartSpec[] {
   return [
     {
       title: 'Median compression fraction',
+      spc: ['compressionFraction', 'compressionFractionMet'],
       scale: 100,
       unit: '%',
       points: s.compressionFraction,
@@ -22,6 +24,7 @@ function chartSpecs(t: TrendsResponse): ChartSpec[] {
     },
     {
       title: 'Records with EtCO2 documented',
+      spc: ['etco2Documented'],
       scale: 100,
       unit: '%',
       points: s.etco2Documented,
@@ -36,6 +39,7 @@ function chartSpecs(t: TrendsResponse): ChartSpec[] {
     },
     {
       title: 'Median time to first shock (shockable)',
+      spc: ['timeToFirstShockSec'],
       scale: 1,
       unit: 's',
       points: s.timeToFirstShockSec,
@@ -43,6 +47,7 @@ function chartSpecs(t: TrendsResponse): ChartSpec[] {
     },
     {
       title: 'Median time to first epinephrine (non-shockable)',
+      spc: ['timeToFirstEpinephrineSec'],
       scale: 1,
       unit: 's',
       points: s.timeToFirstEpinephrineSec,
@@ -55,7 +60,7 @@ function chartSpecs(t: TrendsResponse): ChartSpec[] {
       points: s.preshockLongPerRecord,
       target: t.targets.preshockLongPerRecord,
     },
-    { title: 'Any ROSC', scale: 100, unit: '%', points: s.anyRosc, target: null },
+    { title: 'Any ROSC', scale: 100, unit: '%', points: s.anyRosc, target: null, spc: ['anyRosc'] },
     { title: 'Sustained ROSC', scale: 100, unit: '%', points: s.sustainedRosc, target: null },
   ];
 }
@@ -107,10 +112,11 @@ export function TrendsPage() {
           {trends.data.total === 0 ? (
             <Typography color="text.secondary">No signed records match these filters.</Typography>
           ) : (
-            chartSpecs(trends.data).map((c) => <TrendChart key={c.title} {...c} />)
+            chartSpecs(trends.data).map((c) => <TrendChart key={c.title} {...c} filter={filter} />)
           )}
         </Box>
       )}
+      <FunnelSection filter={filter} />
       <Stack spacing={3}>
         <Box component="section" aria-labelledby="records-title" className="no-print">
           <Typography id="records-title" variant="h2" gutterBottom>
