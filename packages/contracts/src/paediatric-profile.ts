@@ -68,7 +68,7 @@ export const paediatricDefaults: Record<PaediatricKey, number> = {
 };
 
 const ahaPaedDrugs = 'AHA paediatric drug table (Kleinman 2010, Circulation 122:S876, Table 1)';
-const aha2020 = 'AHA 2020 paediatric guideline (Topjian, Circulation 142 suppl 2:S469)';
+const aha2020 = 'AHA 2020 paediatric guideline (Topjian, Circulation 142 suppl 2:S469), Part 4';
 
 /** The published source of each default, shown to users beside the value. */
 export const paediatricSources: Record<PaediatricKey, string> = {
@@ -83,12 +83,13 @@ export const paediatricSources: Record<PaediatricKey, string> = {
   paediatricCalciumChlorideMaxMl: `${ahaPaedDrugs}: max single dose 2 g (20 mL of 10 %)`,
   paediatricMagnesiumMgPerKg: `${ahaPaedDrugs}: magnesium sulfate 25–50 mg/kg`,
   paediatricMagnesiumMaxMg: `${ahaPaedDrugs}: max 2 g`,
-  paediatricFirstShockJPerKg: `${aha2020}: 2 J/kg (ERC 2021, Van de Voorde, Resuscitation 161:327: 4 J/kg)`,
-  paediatricLaterShockJPerKg: `${aha2020}: 4 J/kg`,
-  paediatricShockMaxJPerKg: `${aha2020}: up to 10 J/kg or the adult dose`,
-  paediatricShockMaxJ: 'AHA 2020 adult guideline: biphasic 120–200 J per device maker',
-  paediatricVentilationMaxPerMin: `${aha2020}: 20–30/min with an advanced airway`,
-  infantVentilationMaxPerMin: `${aha2020}: 20–30/min for infants and children with an advanced airway`,
+  paediatricFirstShockJPerKg: `${aha2020}, defibrillation: 2 J/kg (ERC 2021 paediatric guideline, Van de Voorde, Resuscitation 161:327: 4 J/kg)`,
+  paediatricLaterShockJPerKg: `${aha2020}, defibrillation: 4 J/kg`,
+  paediatricShockMaxJPerKg: `${aha2020}, defibrillation: up to 10 J/kg or the adult dose`,
+  paediatricShockMaxJ:
+    'AHA 2020 adult guideline (Panchal, Circulation 142 suppl 2:S366), Part 3, defibrillation: biphasic 120–200 J per device maker',
+  paediatricVentilationMaxPerMin: `${aha2020}, ventilation with an advanced airway: 20–30/min`,
+  infantVentilationMaxPerMin: `${aha2020}, ventilation with an advanced airway: 20–30/min for infants and children`,
 };
 
 export type PaediatricFieldGroup =

@@ -60,33 +60,40 @@ export const thresholdDefaults: Thresholds = {
   ventilationMaxPerMin: 10, // AHA 2020: 1 breath every 6 s with an advanced airway
   ventilationTolerancePerMin: 2, // common practice
   waveformAbsentSec: 30, // PRODUCT.md rule: common practice
-  rebreathingBaselineMmHg: 2, // secondary source; the 2 mmHg cut-off is from memory
+  rebreathingBaselineMmHg: 2, // common practice: no published cut-off (docs/profile-sources.md)
   compressionFractionTarget: 0.8, // Meaney 2013 goal (> 80 %)
   ...paediatricDefaults,
 };
 
-/** Where each default comes from, shown beside the field on the Admin screen. */
+const ahaAdult = 'AHA 2020 adult guideline (Panchal, Circulation 142 suppl 2:S366), Part 3';
+const meaney = 'Meaney 2013 CPR quality consensus, Circulation 128:417';
+
+/**
+ * Where each default comes from, shown beside the field on the Admin screen: guideline or
+ * paper, year and section (status of each in docs/profile-sources.md). A value with no
+ * publication behind it says "Common practice".
+ */
 export const thresholdSources: Record<keyof Thresholds, string> = {
-  lowEtco2MmHg: 'AHA 2020 adult ALS; Sandroni 2018, Resuscitation 132:73',
-  lowEtco2MinSec: 'Common practice',
-  targetEtco2MmHg: 'Meaney 2013, Circulation 128:417',
-  riseMmHg: 'Lui 2016, Resuscitation 104:53',
+  lowEtco2MmHg: `${ahaAdult}, physiologic monitoring during CPR; Sandroni 2018, Resuscitation 132:73`,
+  lowEtco2MinSec: 'Common practice (no published duration)',
+  targetEtco2MmHg: `${meaney}, physiologic targets`,
+  riseMmHg: 'Lui 2016, Resuscitation 104:53 (abrupt rise of 10 mmHg or more)',
   riseBaselineSec: 'Common practice',
   riseSustainSec: 'Common practice',
-  confounderWindowSec: 'Roh 2024, Am J Emerg Med 76:211',
-  prognosisAfterSec: 'Paiva 2018 systematic review, Resuscitation',
-  prognosisEtco2MmHg: 'Paiva 2018 systematic review, Resuscitation',
-  pauseMaxSec: 'AHA BLS guidance',
-  preshockPauseMaxSec: 'Cheskes 2011, Circulation 124:58',
-  rhythmCheckIntervalSec: 'AHA 2020; Resuscitation Council UK 2021',
+  confounderWindowSec: 'Roh 2024, Am J Emerg Med 76:211 (rise after bicarbonate lasts minutes)',
+  prognosisAfterSec: 'Paiva 2018 systematic review, Resuscitation 123:1 (20 min of CPR)',
+  prognosisEtco2MmHg: 'Paiva 2018 systematic review, Resuscitation 123:1 (advanced airway)',
+  pauseMaxSec: `${ahaAdult}, CPR quality: interruptions under 10 s`,
+  preshockPauseMaxSec: 'Cheskes 2011, Circulation 124:58 (peri-shock pauses)',
+  rhythmCheckIntervalSec: `${ahaAdult}, cardiac arrest algorithm (every 2 min); RCUK 2021 ALS`,
   rhythmCheckToleranceSec: 'Common practice',
-  epinephrineMinSec: 'AHA 2020',
-  epinephrineMaxSec: 'AHA 2020',
-  ventilationMaxPerMin: 'AHA 2020 (1 breath every 6 s with an advanced airway)',
+  epinephrineMinSec: `${ahaAdult}, vasopressors: every 3–5 min`,
+  epinephrineMaxSec: `${ahaAdult}, vasopressors: every 3–5 min`,
+  ventilationMaxPerMin: `${ahaAdult}, ventilation with an advanced airway: 1 breath every 6 s`,
   ventilationTolerancePerMin: 'Common practice',
   waveformAbsentSec: 'Common practice',
   rebreathingBaselineMmHg: 'Common practice (no published cut-off)',
-  compressionFractionTarget: 'Meaney 2013 (goal > 80 %)',
+  compressionFractionTarget: `${meaney}: goal above 80 %`,
   ...paediatricSources,
 };
 

@@ -10,6 +10,7 @@ import {
 import {
   CONFIRM_FACTOR,
   differsFromDefault,
+  formatEtco2Both,
   needsConfirmation,
   type Thresholds,
   thresholdDefaults,
@@ -42,6 +43,9 @@ export function ProfileField({
   const error = formState.errors.thresholds?.[name]?.message;
   const confirmErrors = formState.errors.confirmations?.[name];
   const u = unit ? ` ${unit}` : '';
+  // Profiles are stored in mmHg; a kPa site's admin reads the default in kPa beside it.
+  const shownDefault =
+    unit === 'mmHg' ? formatEtco2Both(thresholdDefaults[name]) : `${thresholdDefaults[name]}${u}`;
   return (
     <Box>
       <TextField
@@ -50,7 +54,7 @@ export function ProfileField({
         type="number"
         {...register(`thresholds.${name}`, { valueAsNumber: true })}
         error={Boolean(error)}
-        helperText={error ?? `Default ${thresholdDefaults[name]}${u} — ${thresholdSources[name]}`}
+        helperText={error ?? `Default ${shownDefault} — ${thresholdSources[name]}`}
         slotProps={{
           htmlInput: { step, min, max },
           input: unit

@@ -24,8 +24,11 @@ describe('ProfileForm', { timeout: 60_000 }, () => {
     renderForm();
     const low = screen.getByRole('spinbutton', { name: 'Low EtCO2' });
     expect(low).toHaveValue(thresholdDefaults.lowEtco2MmHg);
-    // AHA 2020 adult ALS; Sandroni 2018 (REFERENCE.md, summary): default 10 mmHg.
-    expect(screen.getByText(/Default 10 mmHg — AHA 2020 adult ALS/)).toBeInTheDocument();
+    // AHA 2020 adult ALS; Sandroni 2018 (REFERENCE.md, summary): default 10 mmHg, which is
+    // 1.3 kPa (1 kPa = 7.50062 mmHg, definition of the mmHg) for a site working in kPa.
+    expect(
+      screen.getByText(/Default 10 mmHg \(1\.3 kPa\) — AHA 2020 adult guideline .*Part 3/),
+    ).toBeInTheDocument();
   });
 
   it('refuses an impossible threshold with a message naming the field, range and unit', async () => {
