@@ -6,14 +6,16 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { buildAll, migrateAndSeed } from './lib/build.mjs';
 import { ensureDependencies } from './lib/deps.mjs';
+import { freePort } from './lib/ports.mjs';
 import { ensureDatabase, startCluster } from './lib/postgres.mjs';
 import { log, runAsync } from './lib/run.mjs';
 import { waitForHttp } from './lib/wait.mjs';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const work = path.join(root, '.local', 'bench');
-const pgPort = Number(process.env.BENCH_PG_PORT ?? 54349);
-const appPort = Number(process.env.BENCH_PORT ?? 8092);
+// Preferred ports; one that is taken (a test run, `npm start`) is swapped for a free one.
+const pgPort = await freePort(Number(process.env.BENCH_PG_PORT ?? 54349));
+const appPort = await freePort(Number(process.env.BENCH_PORT ?? 8092), new Set([pgPort]));
 const only = process.argv.slice(2);
 const cleanups = [];
 

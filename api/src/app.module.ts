@@ -23,6 +23,7 @@ import { ReviewsModule } from './modules/reviews/reviews.module';
 import { SiteContextModule } from './modules/site-context/site-context.module';
 import { SitesModule } from './modules/sites/sites.module';
 import { UsersModule } from './modules/users/users.module';
+import { WorkPoolModule } from './modules/work-pool/work-pool.module';
 
 @Module({})
 export class AppModule {
@@ -45,6 +46,7 @@ export class AppModule {
           },
         }),
         DatabaseModule,
+        WorkPoolModule,
         AuditModule,
         AuthModule,
         HealthModule,

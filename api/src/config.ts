@@ -1,4 +1,5 @@
 import crypto from 'node:crypto';
+import os from 'node:os';
 
 /** Runtime settings, all from the environment (see DEVELOPERS.md). */
 export interface AppConfig {
@@ -20,7 +21,8 @@ export interface AppConfig {
   dbPoolMax: number;
   /** pino level for request logs; `silent` under tests. */
   logLevel: string;
-  /** IANA time zone of the clock times in PDF reports (the server's own when unset). */
+  /** Worker threads for analysis and PDF rendering (one core stays free for requests). */
+  workerThreads: number;
   /** How often the outbox worker retries queued mail; 0 = never (tests call it directly). */
   mailRetryIntervalMs: number;
 }
@@ -50,6 +52,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     smtpSinkPort: env.SMTP_SINK_PORT ? Number(env.SMTP_SINK_PORT) : null,
     dbPoolMax: Number(env.DB_POOL_MAX ?? 10),
     logLevel: test ? 'silent' : (env.LOG_LEVEL ?? 'info'),
+    workerThreads: Number(
+      env.WORKER_THREADS ?? Math.min(4, Math.max(1, os.availableParallelism() - 1)),
+    ),
     mailRetryIntervalMs: test ? 0 : Number(env.MAIL_RETRY_INTERVAL_MS ?? 30_000),
   };
 }

@@ -1,5 +1,4 @@
 import { Injectable } from '@nestjs/common';
-import { composeDebrief } from '@upstroke/capno';
 import type { Debrief, Waveform } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { notFound } from '../../common/errors';
@@ -7,15 +6,17 @@ import { ClinicalDataRepository } from '../resuscitations/clinical-data.reposito
 import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
 import type { ResuscitationRow } from '../resuscitations/resuscitations.repository';
 import { toResuscitation } from '../resuscitations/resuscitations.service';
+import { WorkPool } from '../work-pool/work-pool.service';
 import { DebriefRepository } from './debrief.repository';
 
-/** Loads the stored record (one loader) and its header; capno composes the debrief. */
+/** Loads the stored record (one loader) and its header; capno composes the debrief (in a worker). */
 @Injectable()
 export class DebriefService {
   constructor(
     private readonly access: ResuscitationAccess,
     private readonly data: ClinicalDataRepository,
     private readonly repo: DebriefRepository,
+    private readonly pool: WorkPool,
   ) {}
 
   async forUser(user: AuthUser, id: string): Promise<Debrief> {
@@ -38,7 +39,8 @@ export class DebriefService {
     ]);
     if (!stored) throw notFound('Resuscitation');
     const { profileId: _profileId, ...header } = toResuscitation(record);
-    return composeDebrief(stored, {
+    // capno's analysis of a long record takes 100 ms and more: off the event loop.
+    return this.pool.run('compose', stored, {
       record: { ...header, ...context },
       amendments: amendments.map((a) => ({ ...a, createdAt: a.createdAt.toISOString() })),
       computedBy: 'server',

@@ -5,8 +5,8 @@ import { forbidden } from '../../common/errors';
 import { APP_CONFIG, type AppConfig } from '../../config';
 import { AuditRepository } from '../audit/audit.repository';
 import { DebriefService } from '../debrief/debrief.service';
+import { WorkPool } from '../work-pool/work-pool.service';
 import { type FhirBundle, toFhirBundle } from './fhir/fhir-bundle';
-import { renderReportPdf } from './pdf/report-pdf';
 import { appVersion } from './version';
 
 /**
@@ -20,6 +20,7 @@ export class ExportsService {
     private readonly debrief: DebriefService,
     private readonly audit: AuditRepository,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
+    private readonly pool: WorkPool,
   ) {}
 
   private async load(user: AuthUser, id: string): Promise<Debrief> {
@@ -36,12 +37,13 @@ export class ExportsService {
     return { file, name };
   }
 
-  /** Renders an already loaded debrief (also used to attach it to e-mail). */
-  pdfOf(d: Debrief): Promise<Buffer> {
-    return renderReportPdf(d, {
+  /** Renders an already loaded debrief (also used to attach it to e-mail), in a worker. */
+  async pdfOf(d: Debrief): Promise<Buffer> {
+    const bytes = await this.pool.run('report', d, {
       version: appVersion(),
       generatedAt: new Date(),
     });
+    return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   }
 
   async fhir(user: AuthUser, id: string): Promise<FhirBundle> {
