@@ -131,6 +131,17 @@ async function main(): Promise<void> {
       accessToken,
       RUNS,
     );
+    // Control limits are computed per request over the monthly counts (SQL), then in capno.
+    const controlChart = await timed(
+      `${api.url}/api/trends/control-chart?${q}&measure=compressionFractionMet`,
+      accessToken,
+      RUNS,
+    );
+    const funnel = await timed(
+      `${api.url}/api/trends/funnel?${q}&measure=anyRosc`,
+      accessToken,
+      RUNS,
+    );
     const t0 = performance.now();
     const csv = await (
       await fetch(`${api.url}/api/trends/export.csv`, {
@@ -160,6 +171,8 @@ async function main(): Promise<void> {
       period: { from, to },
       trendsSeries: { ...series, targetP95Ms: 200 },
       utstein: { ...utstein, targetP95Ms: 300 },
+      controlChart: { ...controlChart, targetP95Ms: 200 },
+      funnel: { ...funnel, targetP95Ms: 200 },
       recordsPage: records,
       csvExport: {
         rows: csv.trim().split('\r\n').length - 1,

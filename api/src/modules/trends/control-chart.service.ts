@@ -29,7 +29,7 @@ export class ControlChartService {
   async chart(user: AuthUser, q: ControlChartQuery): Promise<ControlChartResponse> {
     const { measure, baselineFrom, baselineTo, ...filter } = q;
     const scoped = this.trends.scope(user, filter);
-    const rows = await this.repo.monthly(scoped, DEFAULT_CF_TARGET);
+    const rows = await this.repo.monthly(scoped, DEFAULT_CF_TARGET, !isProportion(measure));
     const months = monthsBetween(
       scoped.from ?? rows[0]?.month,
       scoped.to ?? rows.at(-1)?.month,

@@ -31,9 +31,9 @@ export function proportionOf(measure: SpcMeasure, c: SpcCounts | undefined) {
 /** The month's median and how many records it rests on, for a continuous measure. */
 export function medianOf(measure: SpcMeasure, row: SpcMonthRow | undefined) {
   if (!row) return { value: null, n: 0 };
-  if (measure === 'timeToFirstShockSec') return { value: row.shock, n: row.shockN };
-  if (measure === 'timeToFirstEpinephrineSec') return { value: row.epi, n: row.epiN };
-  return { value: row.cf, n: row.cfN };
+  if (measure === 'timeToFirstShockSec') return { value: row.shock ?? null, n: row.shockN };
+  if (measure === 'timeToFirstEpinephrineSec') return { value: row.epi ?? null, n: row.epiN };
+  return { value: row.cf ?? null, n: row.cfN };
 }
 
 const nextMonth = (month: string) => {

@@ -35,20 +35,28 @@ function withTargets(db: Knex, f: ScopedFilter, defaultTarget: number): Knex.Que
  * first shock counts shockable first rhythms only, time to first epinephrine non-shockable
  * ones, as in the trends series.
  */
-export function monthlyCountsQuery(db: Knex, f: ScopedFilter, defaultTarget: number) {
-  return withTargets(db, f, defaultTarget)
-    .select(
-      db.raw(`to_char(date_trunc('month', rs.arrest_at at time zone 'UTC'), 'YYYY-MM') as month`),
+export function monthlyCountsQuery(
+  db: Knex,
+  f: ScopedFilter,
+  defaultTarget: number,
+  withMedians = true,
+) {
+  const q = withTargets(db, f, defaultTarget).select(
+    db.raw(`to_char(date_trunc('month', rs.arrest_at at time zone 'UTC'), 'YYYY-MM') as month`),
+    db.raw(`count(rs.time_to_first_shock_sec) filter (where rs.shockable)::int as shock_n`),
+    db.raw(
+      `count(rs.time_to_first_epinephrine_sec) filter (where rs.shockable = false)::int as epi_n`,
+    ),
+  );
+  // Medians sort each month's rows: a p-chart does without them.
+  if (withMedians) {
+    q.select(
       db.raw(`${median('rs.compression_fraction')} as cf`),
       db.raw(`${median('rs.time_to_first_shock_sec', 'rs.shockable')} as shock`),
-      db.raw(`count(rs.time_to_first_shock_sec) filter (where rs.shockable)::int as shock_n`),
       db.raw(`${median('rs.time_to_first_epinephrine_sec', 'rs.shockable = false')} as epi`),
-      db.raw(
-        `count(rs.time_to_first_epinephrine_sec) filter (where rs.shockable = false)::int as epi_n`,
-      ),
-    )
-    .groupBy('month')
-    .orderBy('month');
+    );
+  }
+  return q.groupBy('month').orderBy('month');
 }
 
 /** Counts per unit (null: no unit recorded) or per site, over the whole filtered period. */

@@ -16,10 +16,11 @@ export interface SpcCounts {
 
 export interface SpcMonthRow extends SpcCounts {
   month: string;
-  cf: number | null;
-  shock: number | null;
+  /** Medians: absent when the query left them out. */
+  cf?: number | null;
+  shock?: number | null;
   shockN: number;
-  epi: number | null;
+  epi?: number | null;
   epiN: number;
 }
 
@@ -38,8 +39,8 @@ export interface NamedGroup {
 export class SpcRepository {
   constructor(@Inject(KNEX) private readonly db: Db) {}
 
-  monthly(f: ScopedFilter, defaultTarget: number): Promise<SpcMonthRow[]> {
-    return monthlyCountsQuery(this.db, f, defaultTarget);
+  monthly(f: ScopedFilter, defaultTarget: number, withMedians: boolean): Promise<SpcMonthRow[]> {
+    return monthlyCountsQuery(this.db, f, defaultTarget, withMedians);
   }
 
   groups(f: ScopedFilter, by: 'unit' | 'site', defaultTarget: number): Promise<SpcGroupRow[]> {
