@@ -2,6 +2,7 @@ import { Alert, Button, Typography } from '@mui/material';
 import type { AgeGroup } from '@upstroke/contracts';
 import { type ReactNode, useState } from 'react';
 import { isPaediatric, type WeightEstimate } from '../lib/paediatric';
+import { AgeGroupSwitch, type OnAgeGroup } from './age-group-switch';
 import { type Choice, ChoiceDialog } from './choice-dialog';
 import { WeightPrompt } from './weight-prompt';
 
@@ -27,6 +28,7 @@ export function DoseChoiceDialog<T>(props: {
   adultLabel: string;
   onPick: (value: T) => void;
   onWeight: OnWeight;
+  onAgeGroup: OnAgeGroup;
   onClose: () => void;
   children?: ReactNode;
 }) {
@@ -41,9 +43,15 @@ export function DoseChoiceDialog<T>(props: {
     props.onPick(value);
   };
   const base = { open: props.open, title: props.title, onPick: pick, onClose: close };
+  const onAgeGroup = (g: AgeGroup) => {
+    setAdultStep(false);
+    props.onAgeGroup(g);
+  };
+  const ages = <AgeGroupSwitch value={ageGroup ?? 'adult'} onChange={onAgeGroup} />;
   if (!ageGroup || !isPaediatric(ageGroup))
     return (
       <ChoiceDialog {...base} choices={props.adultChoices}>
+        {ages}
         {props.children}
       </ChoiceDialog>
     );
@@ -51,6 +59,7 @@ export function DoseChoiceDialog<T>(props: {
   if (!weightKg)
     return (
       <ChoiceDialog {...base} choices={[]}>
+        {ages}
         <WeightPrompt ageGroup={ageGroup} onWeight={props.onWeight} />
       </ChoiceDialog>
     );
@@ -61,6 +70,7 @@ export function DoseChoiceDialog<T>(props: {
         title={`${props.title}: ${props.adultLabel.toLowerCase()}`}
         choices={props.adultChoices}
       >
+        {ages}
         <Alert severity="warning" sx={{ mb: 1 }}>
           {props.adultLabel}: fixed adult values, not weight-based. This is a {who.toLowerCase()}{' '}
           record ({weightKg} kg).
@@ -73,6 +83,7 @@ export function DoseChoiceDialog<T>(props: {
     );
   return (
     <ChoiceDialog {...base} choices={props.weightChoices(weightKg)}>
+      {ages}
       <Typography variant="body2" sx={{ mb: 1 }}>
         {who}, {weightKg} kg: weight-based values from the site profile, each with its arithmetic
         and cap.

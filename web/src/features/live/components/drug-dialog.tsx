@@ -1,6 +1,7 @@
 import { ToggleButton, ToggleButtonGroup } from '@mui/material';
 import type { EventData, Thresholds } from '@upstroke/contracts';
 import { useState } from 'react';
+import type { OnAgeGroup } from './age-group-switch';
 import { DoseChoiceDialog, type OnWeight, type Patient } from './dose-choice-dialog';
 import { adultDrugPresets, type DrugPreset, paediatricDrugPresets } from './drug-presets';
 
@@ -13,6 +14,7 @@ export function DrugDialog(props: {
   thresholds: Thresholds;
   onDrug: (data: EventData<'drug'>) => void;
   onWeight: OnWeight;
+  onAgeGroup: OnAgeGroup;
   onClose: () => void;
 }) {
   const [route, setRoute] = useState<'iv' | 'io'>('iv');
@@ -26,6 +28,7 @@ export function DrugDialog(props: {
       adultLabel="Adult doses"
       onPick={props.onDrug}
       onWeight={props.onWeight}
+      onAgeGroup={props.onAgeGroup}
       onClose={props.onClose}
     >
       <ToggleButtonGroup

@@ -5,6 +5,7 @@ import {
   type EventKind,
   type Thresholds,
 } from '@upstroke/contracts';
+import type { OnAgeGroup } from './age-group-switch';
 import { AirwayDialog } from './airway-dialog';
 import { ChoiceDialog } from './choice-dialog';
 import type { OnWeight, Patient } from './dose-choice-dialog';
@@ -44,6 +45,7 @@ export const LiveDialogs = memo(function LiveDialogs(props: {
   /** Age group and weight: child and infant records get weight-based choices only. */
   patient: Patient;
   onWeight: OnWeight;
+  onAgeGroup: OnAgeGroup;
   shocksGiven: number;
 }) {
   const { open, onClose, record } = props;
@@ -61,6 +63,7 @@ export const LiveDialogs = memo(function LiveDialogs(props: {
         thresholds={props.thresholds}
         shocksGiven={props.shocksGiven}
         onWeight={props.onWeight}
+        onAgeGroup={props.onAgeGroup}
         onShock={(energyJ) => done('shock')({ energyJ })}
         onClose={onClose}
       />
@@ -70,6 +73,7 @@ export const LiveDialogs = memo(function LiveDialogs(props: {
         thresholds={props.thresholds}
         onDrug={done('drug')}
         onWeight={props.onWeight}
+        onAgeGroup={props.onAgeGroup}
         onClose={onClose}
       />
       <AirwayDialog

@@ -7,6 +7,7 @@ import { RosterDialog } from '../../../components/roster-dialog';
 import { useArrestTime } from '../hooks/use-arrest-time';
 import { useLiveActions } from '../hooks/use-live-actions';
 import { type useLiveRecord, useSiteSettings } from '../hooks/use-live-record';
+import { useSaveAgeGroup } from '../hooks/use-save-age-group';
 import { useSaveWeight } from '../hooks/use-save-weight';
 import { useNow } from '../hooks/use-now';
 import { usePrompts } from '../hooks/use-prompts';
@@ -81,6 +82,7 @@ export function LiveScreen({
     [record.ageGroup, record.weightKg],
   );
   const onWeight = useSaveWeight(record.id, actions.record);
+  const onAgeGroup = useSaveAgeGroup(record.id, record.ageGroup, actions.record);
   return (
     <Stack spacing={1.5}>
       <LiveHeader
@@ -155,6 +157,7 @@ export function LiveScreen({
         etco2Unit={etco2Unit}
         patient={patient}
         onWeight={onWeight}
+        onAgeGroup={onAgeGroup}
         shocksGiven={state.shocks}
       />
       {dialog === 'details' && <DetailsDialog open record={record} onClose={close} />}

@@ -1,6 +1,7 @@
 import type { Thresholds } from '@upstroke/contracts';
 import { paediatricShocks } from '../lib/paediatric';
 import type { Choice } from './choice-dialog';
+import type { OnAgeGroup } from './age-group-switch';
 import { DoseChoiceDialog, type OnWeight, type Patient } from './dose-choice-dialog';
 
 /** Common adult biphasic settings (common practice; the device's own range applies). */
@@ -16,6 +17,7 @@ export function ShockDialog(props: {
   shocksGiven: number;
   onShock: (energyJ: number) => void;
   onWeight: OnWeight;
+  onAgeGroup: OnAgeGroup;
   onClose: () => void;
 }) {
   const weightChoices = (kg: number): Choice<number>[] =>
@@ -34,6 +36,7 @@ export function ShockDialog(props: {
       adultLabel="Adult energies"
       onPick={props.onShock}
       onWeight={props.onWeight}
+      onAgeGroup={props.onAgeGroup}
       onClose={props.onClose}
     />
   );
