@@ -45,6 +45,14 @@ export const simulatorQuerySchema = z.object({
   speed: z.coerce.number().min(0.1).max(100).default(1),
   /** Start this many seconds into the scenario (demos; the tests use it to reach ROSC). */
   from: z.coerce.number().min(0).max(3600).default(0),
+  /**
+   * A simulated link drop (a cable pulled out): this many seconds of the stream after the
+   * simulated monitor first connected, the link falls silent for `dropFor` seconds while the
+   * monitor keeps running; reconnecting meanwhile is refused, and afterwards the link resumes
+   * at the present. The same address is the same monitor, so a reconnect finds it still running.
+   */
+  dropAfter: z.coerce.number().min(0).max(3600).optional(),
+  dropFor: z.coerce.number().min(1).max(600).default(20),
 });
 export type SimulatorQuery = z.infer<typeof simulatorQuerySchema>;
 

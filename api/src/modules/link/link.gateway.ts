@@ -10,13 +10,20 @@ import { HttpAdapterHost } from '@nestjs/core';
 import { simulatorQuerySchema } from '@upstroke/contracts';
 import { WebSocketServer, type WebSocket } from 'ws';
 import { startPacedLink } from './paced-link';
+import { isDown, SimulatedDrops } from './simulated-drop';
 import { simulatorSource } from './simulator';
 
 export const SIMULATOR_PATH = '/api/link/simulator';
 
+const reasons: Record<number, string> = {
+  400: 'Bad Request',
+  404: 'Not Found',
+  503: 'Service Unavailable',
+};
+
 function refuse(socket: Duplex, status: number, message: string): void {
   socket.end(
-    `HTTP/1.1 ${status} ${status === 400 ? 'Bad Request' : 'Not Found'}\r\n` +
+    `HTTP/1.1 ${status} ${reasons[status]}\r\n` +
       `Content-Type: text/plain\r\nConnection: close\r\n\r\n${message}\n`,
   );
 }
@@ -30,6 +37,7 @@ export class LinkGateway implements OnApplicationBootstrap, OnApplicationShutdow
   private readonly logger = new Logger('LinkGateway');
   private readonly wss = new WebSocketServer({ noServer: true, maxPayload: 64 * 1024 });
   private readonly stops = new Set<() => void>();
+  private readonly drops = new SimulatedDrops();
 
   constructor(private readonly adapterHost: HttpAdapterHost) {}
 
@@ -54,10 +62,20 @@ export class LinkGateway implements OnApplicationBootstrap, OnApplicationShutdow
       const issue = query.error.issues[0];
       return refuse(socket, 400, `${issue.path.join('.')}: ${issue.message}`);
     }
+    const q = query.data;
+    const now = Date.now();
+    const drop = this.drops.plan(url.search, q, now);
+    if (drop && isDown(drop, q.speed, now))
+      return refuse(socket, 503, 'monitor link down (simulated drop)');
     this.wss.handleUpgrade(req, socket, head, (ws: WebSocket) => {
-      const src = simulatorSource(query.data);
-      const fromIndex = Math.round(query.data.from * src.sampleRateHz);
-      const stop = startPacedLink(ws, src, { speed: query.data.speed, fromIndex });
+      const src = simulatorSource(q);
+      const fromIndex = Math.round(q.from * src.sampleRateHz);
+      const stop = startPacedLink(ws, src, {
+        speed: q.speed,
+        fromIndex,
+        anchorMs: drop?.anchorMs,
+        silence: drop?.silence,
+      });
       this.stops.add(stop);
       ws.on('close', () => {
         stop();

@@ -18,6 +18,13 @@ export interface PacedOptions {
   batchSize?: number;
   /** Wall clock (tests). */
   now?: () => number;
+  /**
+   * When the stream began (wall clock, ms): a reconnect to a monitor that kept running
+   * resumes at the present. Default: now (each connection starts its own stream).
+   */
+  anchorMs?: number;
+  /** Stream times (ms, as stamped in `t0`) whose frames never arrive: a simulated drop. */
+  silence?: { fromMs: number; toMs: number };
 }
 
 /** The socket side a link needs: `ws` WebSocket satisfies it. */
@@ -44,7 +51,7 @@ export function startPacedLink(socket: LinkSocket, src: LinkSource, o: PacedOpti
   const fs = src.sampleRateHz;
   const batch = o.batchSize ?? Math.max(1, Math.round(fs / 5));
   const first = o.fromIndex ?? 0;
-  const startMs = now();
+  const startMs = o.anchorMs ?? now();
   const hello: LinkHello = {
     type: 'hello',
     sampleRateHz: fs,
@@ -53,16 +60,22 @@ export function startPacedLink(socket: LinkSocket, src: LinkSource, o: PacedOpti
     source: src.label,
   };
   socket.send(JSON.stringify(hello));
-  let next = first;
+  const dueIndex = () =>
+    Math.min(src.values.length, first + Math.floor(((now() - startMs) / 1000) * o.speed * fs));
+  // A stream joined late starts at the present, on the stream's own frame boundaries.
+  let next = first + Math.floor((dueIndex() - first) / batch) * batch;
   let seq = 0;
+  const silent = (index: number) => {
+    const t0 = startMs + ((index - first) * 1000) / fs;
+    return o.silence !== undefined && t0 >= o.silence.fromMs && t0 < o.silence.toMs;
+  };
   const tick = () => {
     if (socket.readyState !== OPEN) return stop();
-    const due = Math.min(
-      src.values.length,
-      first + Math.floor(((now() - startMs) / 1000) * o.speed * fs),
-    );
+    const due = dueIndex();
     while (next + batch <= due && socket.bufferedAmount < MAX_BUFFERED_BYTES) {
-      socket.send(JSON.stringify(frame(src, startMs, first, next, batch, seq++)));
+      // A lost frame still takes its number: a receiver sees the gap by `seq`.
+      if (!silent(next)) socket.send(JSON.stringify(frame(src, startMs, first, next, batch, seq)));
+      seq++;
       next += batch;
     }
     if (next + batch > src.values.length) {
