@@ -128,9 +128,11 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
       <Box
         sx={{ height: 380 }}
         role="img"
-        aria-label={`EtCO2 timeline: ${model.markers.length} event markers, ${model.low.length} low-EtCO2 intervals shaded, ${model.compressions.length} compression periods, ${model.rises.length} EtCO2 rises`}
+        aria-label={`EtCO2 timeline: ${model.markers.length} event markers, ${model.low.length} low-EtCO2 intervals shaded, ${model.compressions.length} compression periods, ${model.rises.length} EtCO2 rises, ${model.gaps.length} data gaps (no capnogram stored)`}
         data-markers={model.markers.length}
         data-low-intervals={model.low.length}
+        // The grey data-gap bands drawn on the chart, as "start–end" seconds from the arrest.
+        data-gaps={model.gaps.map((g) => `${g.startSec}-${g.endSec}`).join(' ')}
       >
         <Scatter ref={ref} data={data} options={options} />
       </Box>

@@ -83,6 +83,7 @@ export const MonitorPanel = memo(function MonitorPanel(props: MonitorPanelProps)
                 key={f.kind}
                 severity={f.severity === 'info' ? 'info' : 'warning'}
                 data-finding={f.kind}
+                data-start-sec={Math.round(f.startSec)}
               >
                 {f.message}
               </Alert>
