@@ -17,6 +17,8 @@ export const debriefEventSchema = z.object({
   kind: eventKindSchema,
   data: z.record(z.string(), z.unknown()),
   recordedBy: z.string().nullable(),
+  /** The recorder's name, when the server knows it (a tablet's own debrief does not). */
+  recordedByName: z.string().nullable().optional(),
   /** Added after signing, through the amendment named here. */
   amendment: z.boolean(),
   amendmentId: z.string().nullable(),

@@ -130,23 +130,45 @@ export const measureDefinitions = {
 } as const;
 
 /**
- * Our own short marker for each event kind on a timeline (screen and PDF; each shows a
- * legend). Plain letters, so that every font can draw them.
+ * Our own short marker for each event kind on a timeline (screen and PDF; each shows the
+ * legend below). Compressions on/off have none: both draw them as shaded periods. Plain letters, so that every font can draw them, and chosen so that none
+ * reads as a drug or another abbreviation of the trade: not "A" (adrenaline), "CA"
+ * (calcium), "IV" (access is IV or IO), "E"/"M" (single letters read as drug initials).
  */
 export const eventMarkerCodes: Record<string, string> = {
-  arrest: 'CA',
-  shock: 'S',
-  drug: 'D',
-  airway: 'A',
-  ventilation: 'V',
-  rhythm: 'R',
-  pulse: 'P',
+  arrest: 'T0',
+  shock: 'Shk',
+  drug: 'Med',
+  airway: 'Aw',
+  ventilation: 'Vnt',
+  rhythm: 'Rhy',
+  pulse: 'Pls',
   rosc: 'ROSC',
-  rearrest: 'RA',
-  access: 'IV',
-  note: 'N',
+  rearrest: 'ReA',
+  access: 'Acc',
+  note: 'Nte',
   end: 'End',
 };
+
+/** The marker for epinephrine, the drug whose timing the debrief follows. */
+export const epinephrineMarkerCode = 'Epi';
+
+/** What each marker code means, in drawing order: the legend on the screen and the PDF. */
+export const eventMarkerLegend: readonly { code: string; meaning: string }[] = [
+  { code: eventMarkerCodes.arrest, meaning: 'Arrest (time zero)' },
+  { code: eventMarkerCodes.shock, meaning: 'Shock' },
+  { code: epinephrineMarkerCode, meaning: 'Epinephrine (adrenaline)' },
+  { code: eventMarkerCodes.drug, meaning: 'Other drug' },
+  { code: eventMarkerCodes.airway, meaning: 'Airway' },
+  { code: eventMarkerCodes.ventilation, meaning: 'Ventilation change' },
+  { code: eventMarkerCodes.rhythm, meaning: 'Rhythm' },
+  { code: eventMarkerCodes.pulse, meaning: 'Pulse check' },
+  { code: eventMarkerCodes.rosc, meaning: 'ROSC' },
+  { code: eventMarkerCodes.rearrest, meaning: 'Re-arrest' },
+  { code: eventMarkerCodes.access, meaning: 'Vascular access (IV or IO)' },
+  { code: eventMarkerCodes.note, meaning: 'Note' },
+  { code: eventMarkerCodes.end, meaning: 'End of the code' },
+];
 
 /** Team roles in plain words (roster dialog, debrief e-mail). */
 export const rosterRoleLabels: Record<RosterRole, string> = {

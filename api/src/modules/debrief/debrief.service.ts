@@ -40,10 +40,16 @@ export class DebriefService {
     if (!stored) throw notFound('Resuscitation');
     const { profileId: _profileId, ...header } = toResuscitation(record);
     // capno's analysis of a long record takes 100 ms and more: off the event loop.
-    return this.pool.run('compose', stored, {
+    const composed = await this.pool.run('compose', stored, {
       record: { ...header, ...context },
       amendments: amendments.map((a) => ({ ...a, createdAt: a.createdAt.toISOString() })),
       computedBy: 'server',
     });
+    const names = await this.repo.userNames([
+      ...new Set(stored.events.map((e) => e.recordedBy ?? null)),
+    ]);
+    for (const e of composed.debrief.events)
+      e.recordedByName = e.recordedBy ? (names.get(e.recordedBy) ?? null) : null;
+    return composed;
   }
 }

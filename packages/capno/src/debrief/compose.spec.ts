@@ -86,7 +86,7 @@ describe('composeDebrief (one path from a stored record to every output)', () =>
     expect(by).toMatchObject({ s: null, c1: 'c2', c2: null });
     const inForce = debriefEventsInForce(debrief);
     expect(inForce.find((e) => e.kind === 'shock')?.data).toEqual({ energyJ: 150 });
-    expect(debrief.timeline.markers.map((m) => m.code)).toEqual(['CA', '', 'S', '', 'End']);
+    expect(debrief.timeline.markers.map((m) => m.code)).toEqual(['T0', '', 'Shk', '', 'End']);
   });
 
   it('uses the profile version in force, and falls back to the defaults when it fails the checks', () => {

@@ -2,6 +2,7 @@ import {
   type AnalysisOutput,
   clockFromArrest,
   type DebriefEvent,
+  epinephrineMarkerCode,
   type Etco2Point,
   eventLabel,
   eventMarkerCodes,
@@ -53,9 +54,9 @@ export function ticksFor(endSec: number): TimelineModel['ticks'] {
   return ticks;
 }
 
-/** The short code drawn for an event ('' when it has none); epinephrine is `E`. */
+/** The short code drawn for an event ('' when it has none); epinephrine has its own. */
 export function markerCode(e: Pick<DebriefEvent, 'kind' | 'data'>): string {
-  if (e.kind === 'drug' && e.data.drug === 'epinephrine') return 'E';
+  if (e.kind === 'drug' && e.data.drug === 'epinephrine') return epinephrineMarkerCode;
   return eventMarkerCodes[e.kind] ?? '';
 }
 

@@ -1,6 +1,6 @@
 import { Alert, Box, Card, CardContent, Chip, Stack, Typography } from '@mui/material';
 import { resuscitationStatusLabels } from '@upstroke/contracts';
-import { useMemo, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
 import { ErrorState, Loading, PageHeader } from '../../../components/ui/states';
@@ -13,7 +13,7 @@ import { FindingsList } from './findings-list';
 import { type ImportPanelSlot, ImportSlot } from './import-slot';
 import { LeadNotes } from './lead-notes';
 import { MeasureCards } from './measure-cards';
-import { TimelineChart } from './timeline-chart';
+import { TimelineSection } from './timeline-section';
 import { type Band, timelineModel, viewAround } from './timeline-model';
 
 function Section({ title, children }: { title: string; children: React.ReactNode }) {
@@ -36,6 +36,7 @@ export function DebriefPage({ importPanel }: { importPanel: ImportPanelSlot }) {
   const query = useDebrief(id);
   const [selected, setSelected] = useState<number | null>(null);
   const [view, setView] = useState<Band | null>(null);
+  const timelineRef = useRef<HTMLElement>(null);
   const model = useMemo(() => (query.data ? timelineModel(query.data) : null), [query.data]);
   if (query.isPending) return <Loading label="Loading the debrief…" />;
   if (query.isError) return <ErrorState error={query.error} onRetry={() => void query.refetch()} />;
@@ -47,6 +48,7 @@ export function DebriefPage({ importPanel }: { importPanel: ImportPanelSlot }) {
     const f = d.findings[i];
     setSelected(i);
     if (model) setView(viewAround(f.startSec, f.endSec, model.durationSec));
+    timelineRef.current?.scrollIntoView?.({ behavior: 'smooth', block: 'start' });
   };
   const fmt = formatterFor(d.record.display);
   const title = `Debrief — ${fmt.dateTime(d.record.arrestAt)}`;
@@ -71,19 +73,20 @@ export function DebriefPage({ importPanel }: { importPanel: ImportPanelSlot }) {
         </Alert>
       )}
       <ClinicalCaution />
-      <Section title="Timeline">
-        {model && (
-          <TimelineChart
-            model={model}
-            view={view}
-            highlight={finding ?? null}
-            onResetView={() => {
-              setView(null);
-              setSelected(null);
-            }}
-          />
-        )}
-      </Section>
+      {model && (
+        <TimelineSection
+          ref={timelineRef}
+          debrief={d}
+          model={model}
+          fmt={fmt}
+          view={view}
+          finding={finding}
+          onResetView={() => {
+            setView(null);
+            setSelected(null);
+          }}
+        />
+      )}
       <Section title="Measures">
         <MeasureCards measures={d.measures} unit={d.record.etco2Unit} />
       </Section>
@@ -119,7 +122,7 @@ export function DebriefPage({ importPanel }: { importPanel: ImportPanelSlot }) {
           </Box>
         )}
       </Section>
-      {hasRole('lead', 'recorder') && !offline && (
+      {hasRole('lead', 'recorder') && !offline && d.record.status !== 'signed' && (
         <ImportSlot resuscitationId={id} panel={importPanel} />
       )}
     </Stack>

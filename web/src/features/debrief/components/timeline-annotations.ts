@@ -1,11 +1,54 @@
 import type { AnnotationOptions } from 'chartjs-plugin-annotation';
-import type { Band, TimelineModel } from './timeline-model';
+import type { Band, Marker, TimelineModel } from './timeline-model';
+
+/** The marker in focus, shared with the event table (hover or tap on either side). */
+export interface MarkerLink {
+  active: string | null;
+  onActive: (id: string | null) => void;
+}
+
+function markerColour(e: Marker): string {
+  if (e.kind === 'shock') return '#8a5a00';
+  if (e.kind === 'rosc') return '#2e7d32';
+  return '#455a64';
+}
+
+/**
+ * One line per event with its code along the top, in three rows so that close events stay
+ * readable. Hovering or tapping the code shows the event in words (its tooltip) and picks
+ * its row in the event table.
+ */
+function markerAnnotation(e: Marker, i: number, link: MarkerLink): AnnotationOptions {
+  const on = link.active === e.id;
+  return {
+    type: 'line',
+    xMin: e.tSec,
+    xMax: e.tSec,
+    borderColor: on ? '#0b5c8a' : e.amendment ? '#9a5b00' : 'rgba(60, 60, 60, 0.45)',
+    borderWidth: on ? 3 : 1,
+    hitTolerance: 8,
+    z: on ? 10 : 0,
+    enter: () => link.onActive(e.id),
+    click: () => link.onActive(e.id),
+    label: {
+      display: true,
+      content: on ? [e.code, e.label] : e.code,
+      position: 'end',
+      yAdjust: (i % 3) * 20,
+      backgroundColor: on ? '#0b5c8a' : markerColour(e),
+      font: { size: on ? 12 : 11 },
+      padding: 3,
+      z: on ? 10 : 0,
+    },
+  };
+}
 
 /** Shaded bands, the low threshold, rises and one labelled line per event. */
 export function annotationsOf(
   m: TimelineModel,
   highlight: Band | null,
   yMax: number,
+  link: MarkerLink = { active: null, onActive: () => undefined },
 ): Record<string, AnnotationOptions> {
   const out: Record<string, AnnotationOptions> = {};
   m.compressions.forEach((c, i) => {
@@ -73,25 +116,8 @@ export function annotationsOf(
       label: { display: true, content: r.label, position: 'center', backgroundColor: '#1f6fb2' },
     };
   });
-  // Rows of labels so that close events stay readable.
   m.markers.forEach((e, i) => {
-    out[`ev${i}`] = {
-      type: 'line',
-      xMin: e.tSec,
-      xMax: e.tSec,
-      borderColor: e.amendment ? '#9a5b00' : 'rgba(60, 60, 60, 0.45)',
-      borderWidth: 1,
-      label: {
-        display: true,
-        content: e.code,
-        // Labels along the top, in three rows so that close events stay readable.
-        position: 'end',
-        yAdjust: (i % 3) * 20,
-        backgroundColor: e.code === 'S' ? '#b7791f' : e.code === 'ROSC' ? '#2e7d32' : '#455a64',
-        font: { size: 11 },
-        padding: 3,
-      },
-    };
+    out[`ev${i}`] = markerAnnotation(e, i, link);
   });
   if (highlight) {
     out.focus = {

@@ -13,8 +13,9 @@ import {
 import annotationPlugin from 'chartjs-plugin-annotation';
 import { useEffect, useMemo, useRef } from 'react';
 import { Scatter } from 'react-chartjs-2';
-import { annotationsOf } from './timeline-annotations';
-import type { Band, TimelineModel } from './timeline-model';
+import { MarkerLegend } from './marker-legend';
+import { annotationsOf, type MarkerLink } from './timeline-annotations';
+import { type Band, roundTicks, type TimelineModel } from './timeline-model';
 
 ChartJS.register(LinearScale, PointElement, LineElement, Tooltip, Legend, annotationPlugin);
 
@@ -26,12 +27,7 @@ function useZoomPlugin(): void {
   }, []);
 }
 
-/** Tick spacing in whole minutes (or 10/30 s when zoomed in): about ten ticks. */
-function niceStep(spanSec: number): number {
-  return [10, 30, 60, 120, 300, 600, 900, 1800, 3600].find((s) => spanSec / s <= 12) ?? 7200;
-}
-
-export interface TimelineProps {
+export interface TimelineProps extends MarkerLink {
   model: TimelineModel;
   view: Band | null;
   highlight: Band | null;
@@ -39,7 +35,8 @@ export interface TimelineProps {
 }
 
 /** EtCO2 over the code with every event, compressions, flagged intervals and rises. */
-export function TimelineChart({ model, view, highlight, onResetView }: TimelineProps) {
+export function TimelineChart(props: TimelineProps) {
+  const { model, view, highlight, onResetView } = props;
   useZoomPlugin();
   const ref = useRef<ChartJS<'scatter'>>(null);
   const data: ChartData<'scatter'> = useMemo(
@@ -80,7 +77,6 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
     [model],
   );
   const yMax = model.yMax;
-  const shownSpan = (view?.endSec ?? model.durationSec) - (view?.startSec ?? 0);
   const options: ChartOptions<'scatter'> = {
     animation: false,
     maintainAspectRatio: false,
@@ -90,17 +86,21 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
         min: view?.startSec ?? 0,
         max: view?.endSec ?? model.durationSec,
         title: { display: true, text: 'Time from arrest (min:s)' },
-        ticks: {
-          stepSize: view ? niceStep(shownSpan) : model.tickStepSec,
-          callback: (v) => clockFromArrest(Number(v)),
+        // Round times only, whatever the view: the whole code uses capno's round minutes.
+        afterBuildTicks: (axis) => {
+          const whole = axis.min <= 0 && axis.max >= model.durationSec;
+          axis.ticks = (whole ? model.ticks : roundTicks(axis.min, axis.max)).map((value) => ({
+            value,
+          }));
         },
+        ticks: { callback: (v) => clockFromArrest(Number(v)) },
       },
       y: { min: 0, max: yMax, title: { display: true, text: etco2Heading(model.unit) } },
     },
     plugins: {
       legend: { position: 'bottom' },
       tooltip: { callbacks: { title: (items) => clockFromArrest(items[0]?.parsed.x ?? 0) } },
-      annotation: { annotations: annotationsOf(model, highlight, yMax) },
+      annotation: { annotations: annotationsOf(model, highlight, yMax, props) },
       zoom: {
         pan: { enabled: true, mode: 'x' },
         zoom: { wheel: { enabled: true }, pinch: { enabled: true }, mode: 'x' },
@@ -137,13 +137,11 @@ export function TimelineChart({ model, view, highlight, onResetView }: TimelineP
         <Scatter ref={ref} data={data} options={options} />
       </Box>
       <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 1 }}>
-        {model.markers.length} event markers · {model.low.length} low-EtCO2 intervals shaded (below{' '}
-        {model.lowText}) · {model.compressions.length} compression periods (green) ·{' '}
-        {model.rises.length} EtCO2 rises (dashed: after a confounder) · grey: no capnogram stored.
-        Markers: CA arrest, S shock, E epinephrine, D other drug, A airway, V ventilation, R rhythm,
-        P pulse, ROSC, RA re-arrest, IV access, N note, ▶/■ compressions on/off. Drag or pinch to
-        pan and zoom.
+        Shaded red: EtCO2 below {model.lowText} during compressions · green: compressions · blue:
+        ROSC · grey: no capnogram stored · vertical blue line: EtCO2 rise (dashed: after a
+        confounder). Hover or tap a code for the event; drag or pinch to pan and zoom.
       </Typography>
+      <MarkerLegend />
     </Box>
   );
 }

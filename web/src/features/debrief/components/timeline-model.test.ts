@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { LocalEtco2, LocalEvent, LocalResuscitation, Tracked } from '../../../lib/offline';
 import { debriefFromLocal } from '../api/offline-debrief';
-import { breakAtGaps, timelineModel, viewAround } from './timeline-model';
+import { breakAtGaps, roundTicks, screenLegend, timelineModel, viewAround } from './timeline-model';
 
 const arrestAt = '2026-03-04T10:00:00.000Z';
 const at = (s: number) => new Date(Date.parse(arrestAt) + s * 1000).toISOString();
@@ -59,11 +59,20 @@ describe('offline debrief and timeline model', () => {
     expect(d.findings.some((f) => f.kind === 'etco2-low')).toBe(true);
     const m = timelineModel(d);
     // The superseded shock and the correction itself are replaced by one marker for the replacement.
-    expect(m.markers.map((x) => x.code)).toEqual(['CA', '▶', 'E', 'S', '■', 'End']);
-    expect(m.markers.find((x) => x.code === 'S')?.label).toContain('200 J');
+    expect(m.markers.map((x) => x.code)).toEqual(['T0', '▶', 'Epi', 'Shk', '■', 'End']);
+    expect(m.markers.find((x) => x.code === 'Shk')?.label).toContain('200 J');
     expect(m.compressions).toEqual([{ startSec: 10, endSec: 200 }]);
     expect(m.low.length).toBeGreaterThan(0);
     expect(m.manual).toHaveLength(6);
+  });
+
+  it('puts ticks on round times whatever the view, and explains every code it draws', () => {
+    expect(roundTicks(119, 311)).toEqual([120, 150, 180, 210, 240, 270, 300]);
+    expect(roundTicks(0, 1500)).toEqual([0, 300, 600, 900, 1200, 1500]);
+    expect(roundTicks(71, 160)).toEqual([80, 90, 100, 110, 120, 130, 140, 150, 160]);
+    const d = debriefFromLocal({ record, events, etco2, context: null });
+    const legend = new Set(screenLegend.map((l) => l.code));
+    for (const mk of timelineModel(d).markers) expect(legend.has(mk.code)).toBe(true);
   });
 
   it('frames a finding with a margin, clipped to the record', () => {

@@ -1,4 +1,10 @@
-import { type Debrief, type Etco2DisplayUnit, etco2InUnit, formatEtco2 } from '@upstroke/contracts';
+import {
+  type Debrief,
+  type Etco2DisplayUnit,
+  etco2InUnit,
+  eventMarkerLegend,
+  formatEtco2,
+} from '@upstroke/contracts';
 
 /** Symbols for events without a shared code, that only the screen's fonts draw. */
 const screenSymbols: Record<string, string> = {
@@ -7,9 +13,32 @@ const screenSymbols: Record<string, string> = {
   correction: '✎',
 };
 
+/** The screen's legend: the shared codes (as on the PDF) and the screen's own symbols. */
+export const screenLegend: readonly { code: string; meaning: string }[] = [
+  ...eventMarkerLegend,
+  { code: screenSymbols['compressions-start'], meaning: 'Compressions on' },
+  { code: screenSymbols['compressions-stop'], meaning: 'Compressions off' },
+];
+
+/** Tick spacings (s) for a zoomed view: round times only (10 s … 2 h). */
+const TICK_STEPS_SEC = [10, 15, 30, 60, 120, 300, 600, 900, 1800, 3600, 7200];
+
+/**
+ * Ticks for any view, at round times from the arrest (multiples of the step), never at the
+ * view's own edges (which zooming and panning leave at odd times such as 1:59).
+ */
+export function roundTicks(minSec: number, maxSec: number, maxTicks = 10): number[] {
+  const span = Math.max(1, maxSec - minSec);
+  const step = TICK_STEPS_SEC.find((s) => span / s <= maxTicks) ?? 14400;
+  const out: number[] = [];
+  for (let t = Math.ceil(minSec / step) * step; t <= maxSec; t += step) out.push(t);
+  return out;
+}
+
 export interface Marker {
   id: string;
   tSec: number;
+  kind: string;
   code: string;
   label: string;
   amendment: boolean;
@@ -28,8 +57,8 @@ export interface Rise {
 
 export interface TimelineModel {
   durationSec: number;
-  /** Tick spacing of the whole-code view (capno's round minutes). */
-  tickStepSec: number;
+  /** Ticks of the whole-code view, seconds (capno's round minutes). */
+  ticks: number[];
   /** The site's unit: every EtCO2 value below (points, low line, axis) is in it. */
   unit: Etco2DisplayUnit;
   /** The low-EtCO2 threshold in `unit`, for the dashed line. */
@@ -86,7 +115,7 @@ export function timelineModel(d: Debrief): TimelineModel {
   const ticks = tl.ticks;
   return {
     durationSec: tl.span.endSec,
-    tickStepSec: ticks.length > 1 ? ticks[1].tSec - ticks[0].tSec : 60,
+    ticks: ticks.map((t) => t.tSec),
     unit,
     lowLine: inUnit(d.profile.thresholds.lowEtco2MmHg),
     lowText: formatEtco2(d.profile.thresholds.lowEtco2MmHg, unit),
@@ -106,6 +135,7 @@ export function timelineModel(d: Debrief): TimelineModel {
     markers: tl.markers.map((m) => ({
       id: m.id,
       tSec: m.tSec,
+      kind: m.kind,
       code: m.code || screenSymbols[m.kind] || '•',
       label: m.label,
       amendment: m.amendment,
