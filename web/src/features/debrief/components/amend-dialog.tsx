@@ -10,10 +10,12 @@ import {
   Stack,
   TextField,
 } from '@mui/material';
-import { type DebriefRecord, outcomeLabels } from '@upstroke/contracts';
+import { type DebriefEvent, type DebriefRecord, outcomeLabels } from '@upstroke/contracts';
+import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { useAmend } from '../api/sign-resuscitation';
+import { EventCorrection, type EventFix } from './event-correction';
 
 const formSchema = z.object({
   reason: z.string().trim().min(1, 'A reason is required').max(2000),
@@ -22,9 +24,36 @@ const formSchema = z.object({
 });
 type Form = z.infer<typeof formSchema>;
 
-/** A correction after signing: a reason is required; it changes the outcome or adds a note. */
-export function AmendDialog({ record, onClose }: { record: DebriefRecord; onClose: () => void }) {
+/** A correction of a signed event: the event struck through, its replacement at the same time. */
+function correctionEvent(events: DebriefEvent[], fix: EventFix | null, reason: string) {
+  const old = fix && events.find((e) => e.id === fix.eventId);
+  if (!fix || !old || JSON.stringify(fix.data) === JSON.stringify(old.data)) return [];
+  const replacement = { kind: old.kind, data: fix.data, at: old.at };
+  return [
+    {
+      id: crypto.randomUUID(),
+      at: new Date().toISOString(),
+      kind: 'correction' as const,
+      data: { supersedes: old.id, reason, replacement },
+    },
+  ];
+}
+
+/**
+ * A correction after signing: a reason is required; it corrects an event, changes the
+ * outcome or adds a note.
+ */
+export function AmendDialog({
+  record,
+  events: recorded,
+  onClose,
+}: {
+  record: DebriefRecord;
+  events: DebriefEvent[];
+  onClose: () => void;
+}) {
   const amend = useAmend(record.id);
+  const [fix, setFix] = useState<EventFix | null>(null);
   const { register, handleSubmit, formState, watch } = useForm<Form>({
     resolver: zodResolver(formSchema),
     defaultValues: { reason: '', outcome: record.outcome ?? '', note: '' },
@@ -34,7 +63,7 @@ export function AmendDialog({ record, onClose }: { record: DebriefRecord; onClos
       f.outcome && f.outcome !== record.outcome
         ? { outcome: f.outcome as DebriefRecord['outcome'] }
         : undefined;
-    const events = f.note.trim()
+    const note = f.note.trim()
       ? [
           {
             id: crypto.randomUUID(),
@@ -43,10 +72,17 @@ export function AmendDialog({ record, onClose }: { record: DebriefRecord; onClos
             data: { text: f.note.trim() },
           },
         ]
-      : undefined;
-    amend.mutate({ reason: f.reason, fields, events }, { onSuccess: onClose });
+      : [];
+    const events = [...correctionEvent(recorded, fix, f.reason.trim()), ...note];
+    amend.mutate(
+      { reason: f.reason, fields, events: events.length ? events : undefined },
+      { onSuccess: onClose },
+    );
   });
-  const changes = watch('note').trim() !== '' || watch('outcome') !== (record.outcome ?? '');
+  const changes =
+    watch('note').trim() !== '' ||
+    watch('outcome') !== (record.outcome ?? '') ||
+    correctionEvent(recorded, fix, '').length > 0;
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="amend-title">
       <form onSubmit={(e) => void submit(e)} noValidate>
@@ -65,6 +101,7 @@ export function AmendDialog({ record, onClose }: { record: DebriefRecord; onClos
                 'Shown in the record and the PDF with your name and the time.'
               }
             />
+            <EventCorrection events={recorded} fix={fix} onFix={setFix} />
             <TextField
               select
               label="Outcome"

@@ -1,8 +1,15 @@
 import { Alert, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
-import { type DebriefRecord, formatDateTime, outcomeLabels, rhythmName } from '@upstroke/contracts';
+import {
+  type DebriefEvent,
+  type DebriefRecord,
+  formatDateTime,
+  outcomeLabels,
+  rhythmName,
+} from '@upstroke/contracts';
 import { useState } from 'react';
 import { useSign, useUpdateClosing } from '../api/sign-resuscitation';
 import { AmendDialog } from './amend-dialog';
+import { SignDialog } from './sign-dialog';
 
 type Tri = '' | 'yes' | 'no';
 const tri = (v: boolean | null): Tri => (v === null ? '' : v ? 'yes' : 'no');
@@ -13,7 +20,15 @@ const rhythms = ['vf', 'pvt', 'pea', 'asystole', 'organised'];
  * Utstein core closing details, the signature, and afterwards amendments only: a signed
  * record shows its details read-only and offers "Amend" instead of "Save".
  */
-export function ClosingPanel({ record, canSign }: { record: DebriefRecord; canSign: boolean }) {
+export function ClosingPanel({
+  record,
+  events,
+  canSign,
+}: {
+  record: DebriefRecord;
+  events: DebriefEvent[];
+  canSign: boolean;
+}) {
   const signed = record.status === 'signed';
   const [form, setForm] = useState({
     outcome: record.outcome ?? '',
@@ -22,9 +37,15 @@ export function ClosingPanel({ record, canSign }: { record: DebriefRecord; canSi
     monitored: tri(record.monitored),
   });
   const [amending, setAmending] = useState(false);
+  const [signing, setSigning] = useState(false);
   const save = useUpdateClosing(record.id);
   const sign = useSign(record.id);
-  const complete = Boolean(form.outcome && form.firstRhythm && form.witnessed && form.monitored);
+  const missing = [
+    !form.outcome && 'Outcome',
+    !form.firstRhythm && 'First documented rhythm',
+    !form.witnessed && 'Witnessed',
+    !form.monitored && 'Monitored',
+  ].filter((m): m is string => Boolean(m));
   const body = {
     outcome: (form.outcome || null) as DebriefRecord['outcome'],
     firstRhythm: (form.firstRhythm || null) as DebriefRecord['firstRhythm'],
@@ -88,15 +109,10 @@ export function ClosingPanel({ record, canSign }: { record: DebriefRecord; canSi
             >
               Save closing details
             </Button>
-            <Button
-              variant="contained"
-              disabled={!complete || sign.isPending}
-              sx={{ minHeight: 48 }}
-              onClick={() => save.mutate(body, { onSuccess: () => sign.mutate() })}
-            >
-              Sign and lock
+            <Button variant="contained" sx={{ minHeight: 48 }} onClick={() => setSigning(true)}>
+              Sign and lock…
             </Button>
-            {!complete && (
+            {missing.length > 0 && (
               <Typography variant="body2" color="text.secondary">
                 All four details are needed to sign.
               </Typography>
@@ -107,7 +123,22 @@ export function ClosingPanel({ record, canSign }: { record: DebriefRecord; canSi
       {(save.error ?? sign.error) && (
         <Alert severity="error">{(save.error ?? sign.error)?.message}</Alert>
       )}
-      {amending && <AmendDialog record={record} onClose={() => setAmending(false)} />}
+      {amending && (
+        <AmendDialog record={record} events={events} onClose={() => setAmending(false)} />
+      )}
+      {signing && (
+        <SignDialog
+          resuscitationId={record.id}
+          missing={missing}
+          pending={save.isPending || sign.isPending}
+          onClose={() => setSigning(false)}
+          onConfirm={() =>
+            save.mutate(body, {
+              onSuccess: () => sign.mutate(undefined, { onSuccess: () => setSigning(false) }),
+            })
+          }
+        />
+      )}
     </Stack>
   );
 }

@@ -109,6 +109,7 @@ export function DebriefPage({ importPanel }: { importPanel: ImportPanelSlot }) {
         <ClosingPanel
           key={`${d.record.status}|${d.record.outcome}`}
           record={d.record}
+          events={d.events}
           canSign={lead && !offline}
         />
         {d.amendments.length > 0 && (
