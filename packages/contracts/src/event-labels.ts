@@ -85,10 +85,19 @@ export function eventDetails(kind: string, data: Record<string, unknown>): strin
     case 'end':
       return data.reason ? labelOf(endReasonLabels, str(data.reason)) : '';
     case 'correction':
-      return typeof data.reason === 'string' ? data.reason : '';
+      return correctionDetails(data);
     default:
       return '';
   }
+}
+
+/** A correction in words: what replaced the entry (if anything) and why. */
+function correctionDetails(data: Record<string, unknown>): string {
+  const reason = typeof data.reason === 'string' ? data.reason : '';
+  const r = data.replacement as { kind?: unknown; data?: unknown } | undefined;
+  if (!r || typeof r.kind !== 'string' || !r.data || typeof r.data !== 'object') return reason;
+  const now = `Replaced by ${eventLabel(r.kind, r.data as Record<string, unknown>)}`;
+  return reason ? `${now}. Reason: ${reason}` : now;
 }
 
 /** One line for an event: "Shock 200 J", "Drug Epinephrine 1 mg IV". */
