@@ -120,7 +120,10 @@ describe('debrief, sign and amend as the lead', () => {
     await pick(page, 'First documented rhythm', 'VF');
     await pick(page, 'Witnessed', 'Yes');
     await pick(page, 'Monitored', 'No');
-    await page.getByRole('button', { name: 'Sign and lock' }).click();
+    await page.getByRole('button', { name: 'Sign and lock…' }).click();
+    const confirm = page.getByRole('dialog', { name: 'Sign and lock this record?' });
+    await confirm.getByLabel('I have reviewed this record and it is ready to sign').check();
+    await confirm.getByRole('button', { name: 'Sign and lock', exact: true }).click();
     await page.getByText(/Signed by .* The record is locked/).waitFor();
 
     // Signed: no more editing, "Amend" instead.

@@ -79,8 +79,8 @@ export function RecordsPanel({
       <Stack spacing={1} sx={{ mt: 1.5 }}>
         {search.data && (
           <Typography variant="body2" color="text.secondary" aria-live="polite">
-            {search.data.total} {search.data.total === 1 ? 'record' : 'records'}
-            {filtered ? ' match' : ''}
+            {search.data.total === 1 ? '1 record' : `${search.data.total} records`}
+            {filtered ? (search.data.total === 1 ? ' matches' : ' match') : ''}
           </Typography>
         )}
         <RecordRows
