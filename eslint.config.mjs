@@ -37,6 +37,22 @@ const webZones = [
   },
 ];
 
+/**
+ * An API module reaches another module only through what that module exports to Nest: its
+ * module, its services and its guards; never its repositories, controllers or helpers.
+ */
+const apiZones = foldersIn('api/src/modules').map((name) => ({
+  target: `api/src/modules/${name}`,
+  from: [join(root, 'api/src/modules/**')],
+  except: [
+    join(root, `api/src/modules/${name}/**`),
+    join(root, 'api/src/modules/*/*.module.ts'),
+    join(root, 'api/src/modules/*/*.service.ts'),
+    join(root, 'api/src/modules/*/*.guard.ts'),
+  ],
+  message: 'Reach another module through its exported service, never its repository or helpers.',
+}));
+
 export default tseslint.config(
   {
     ignores: [
@@ -87,7 +103,10 @@ export default tseslint.config(
         { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
       ],
       'import-x/no-cycle': ['error', { maxDepth: 10 }],
-      'import-x/no-restricted-paths': ['error', { basePath: root, zones: [...webZones] }],
+      'import-x/no-restricted-paths': [
+        'error',
+        { basePath: root, zones: [...webZones, ...apiZones] },
+      ],
     },
   },
   {

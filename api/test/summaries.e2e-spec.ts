@@ -1,6 +1,9 @@
 import { randomUUID } from 'node:crypto';
 import { createKnex, type Db } from '../src/db/knex';
 import { ClinicalDataRepository } from '../src/modules/resuscitations/clinical-data.repository';
+import { ClinicalRecordsService } from '../src/modules/resuscitations/clinical-records.service';
+import { EntriesRepository } from '../src/modules/resuscitations/entries.repository';
+import { ResuscitationsRepository } from '../src/modules/resuscitations/resuscitations.repository';
 import { SummariesRepository } from '../src/modules/summaries/summaries.repository';
 import { SummariesService } from '../src/modules/summaries/summaries.service';
 import { aResuscitation, anEtco2, anEvent } from './factories';
@@ -47,7 +50,11 @@ describe('per-record summary rows', () => {
   // The service alone on the test database: no HTTP routes of its own to go through.
   const t: TestDb = { db: createKnex(process.env.DATABASE_URL as string) };
   const service = new SummariesService(
-    new ClinicalDataRepository(t.db),
+    new ClinicalRecordsService(
+      new ResuscitationsRepository(t.db),
+      new ClinicalDataRepository(t.db),
+      new EntriesRepository(t.db),
+    ),
     new SummariesRepository(t.db),
   );
   beforeAll(() => resetDatabase(t.db));

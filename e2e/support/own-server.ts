@@ -1,21 +1,11 @@
 import { type ChildProcess, spawn } from 'node:child_process';
-import { createServer } from 'node:net';
 import path from 'node:path';
 import { databaseUrl } from './env';
 
 const root = path.resolve(__dirname, '..', '..');
 
-/** A free loopback port, chosen by the system. */
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = createServer();
-    s.once('error', reject);
-    s.listen(0, '127.0.0.1', () => {
-      const address = s.address();
-      s.close(() => resolve(typeof address === 'object' && address ? address.port : 0));
-    });
-  });
-}
+// One helper for a free loopback port, shared with the API's tests.
+export { freePort } from '../../api/test/free-port';
 
 async function healthy(url: string, timeoutMs: number): Promise<boolean> {
   const deadline = Date.now() + timeoutMs;

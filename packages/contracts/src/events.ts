@@ -95,10 +95,22 @@ function unionOf<S extends z.ZodRawShape>(shape: S) {
 }
 
 type EventOf<K extends EventKind, Extra> = Extra & { kind: K; data: EventData<K> };
-type AnyEventOf<Extra> = { [K in EventKind]: EventOf<K, Extra> }[EventKind];
+/** Events of every kind carrying the fields `Extra`, discriminated by `kind`. */
+export type AnyEventOf<Extra> = { [K in EventKind]: EventOf<K, Extra> }[EventKind];
 
-/** One recorded event, discriminated by `kind` (CONTRACT.md "Event kinds"). */
-export const eventSchema = unionOf(baseFields);
+/**
+ * One event of `kind` with its data and the fields `extra`, as the discriminated union.
+ * TypeScript cannot choose the union member for a generic kind; the pairing of `kind` and
+ * `data` is checked here by the signature, so callers need no cast.
+ */
+export function eventOfKind<K extends EventKind, Extra extends object>(
+  extra: Extra,
+  kind: K,
+  data: EventData<K>,
+): AnyEventOf<Extra> {
+  return { ...extra, kind, data } as AnyEventOf<Extra>;
+}
+
 export type ResusEvent = AnyEventOf<{
   id: string;
   resuscitationId: string;
@@ -106,6 +118,12 @@ export type ResusEvent = AnyEventOf<{
   recordedBy?: string;
   deviceId?: string;
 }>;
+/**
+ * One recorded event, discriminated by `kind` (CONTRACT.md "Event kinds"). The union is built
+ * over the kinds at run time, which TypeScript cannot follow: its output is declared as the
+ * discriminated `ResusEvent` here, once, so every parse yields the narrowed type.
+ */
+export const eventSchema = unionOf(baseFields) as z.ZodType<ResusEvent>;
 
 /** An event as the analysis reads it (CONTRACT.md "Analysis on files"): id, time, kind, data. */
 export const analysisEventSchema = unionOf({ id: z.string().min(1), at: isoDateTimeSchema });

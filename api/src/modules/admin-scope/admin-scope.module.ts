@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { AdminScopeRepository } from './admin-scope.repository';
+import { AdminScopeService } from './admin-scope.service';
 
-@Module({ providers: [AdminScopeRepository], exports: [AdminScopeRepository] })
+@Module({ providers: [AdminScopeRepository, AdminScopeService], exports: [AdminScopeService] })
 export class AdminScopeModule {}

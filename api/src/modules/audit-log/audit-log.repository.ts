@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import type { AuditQuery } from '@upstroke/contracts';
 import type { Knex } from 'knex';
 import { KNEX, type Db } from '../../db/knex';
-import type { AdminScope } from '../admin-scope/admin-scope.repository';
+import type { AdminScope } from '../../db/admin-scope.sql';
 
 export interface AuditRow {
   id: number;

@@ -1,8 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import type { AuditEntry, AuditQuery, List } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
-import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
-import { AuditRepository } from '../audit/audit.repository';
+import { AdminScopeService } from '../admin-scope/admin-scope.service';
+import { AuditService } from '../audit/audit.service';
 import { auditCsv } from './audit-csv';
 import { type AuditFilter, AuditLogRepository, type AuditRow } from './audit-log.repository';
 
@@ -17,8 +17,8 @@ function toEntry(row: AuditRow): AuditEntry {
 export class AuditLogService {
   constructor(
     private readonly log: AuditLogRepository,
-    private readonly scope: AdminScopeRepository,
-    private readonly audit: AuditRepository,
+    private readonly scope: AdminScopeService,
+    private readonly audit: AuditService,
   ) {}
 
   async list(admin: AuthUser, query: AuditQuery): Promise<List<AuditEntry>> {

@@ -4,8 +4,8 @@ import type { LoginRequest, LoginResponse, User } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import bcrypt from 'bcryptjs';
 import { DomainError } from '../../common/errors';
-import { AuditRepository } from '../audit/audit.repository';
-import { UsersRepository, type UserWithSites } from '../users/users.repository';
+import { AuditService } from '../audit/audit.service';
+import { AccountsService, type UserWithSites } from '../users/accounts.service';
 
 export interface TokenPayload {
   sub: string;
@@ -25,9 +25,9 @@ export function toUser(u: UserWithSites): User {
 @Injectable()
 export class AuthService {
   constructor(
-    private readonly users: UsersRepository,
+    private readonly users: AccountsService,
     private readonly jwt: JwtService,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
   ) {}
 
   /**

@@ -14,7 +14,7 @@ import {
 import type { AuthUser } from '../../common/auth.decorators';
 import { forbidden } from '../../common/errors';
 import { APP_CONFIG, type AppConfig } from '../../config';
-import { AuditRepository } from '../audit/audit.repository';
+import { AuditService } from '../audit/audit.service';
 import { DebriefService } from '../debrief/debrief.service';
 import { ExportsService, fileName } from '../exports/exports.service';
 import { MailService } from '../mail/mail.service';
@@ -66,7 +66,7 @@ export class DebriefMailService {
     private readonly debrief: DebriefService,
     private readonly exportsService: ExportsService,
     private readonly mail: MailService,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
     private readonly sites: SiteContextService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
   ) {}

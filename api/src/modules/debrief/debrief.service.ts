@@ -2,9 +2,9 @@ import { Injectable } from '@nestjs/common';
 import type { Debrief, Waveform } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { notFound } from '../../common/errors';
-import { ClinicalDataRepository } from '../resuscitations/clinical-data.repository';
-import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
-import type { ResuscitationRow } from '../resuscitations/resuscitations.repository';
+import { ClinicalRecordsService } from '../resuscitations/clinical-records.service';
+import { ResuscitationAccess } from '../resuscitations/resuscitation-access.service';
+import type { ResuscitationRow } from '../resuscitations/clinical-records.service';
 import { toResuscitation } from '../resuscitations/resuscitations.service';
 import { WorkPool } from '../work-pool/work-pool.service';
 import { DebriefRepository } from './debrief.repository';
@@ -14,7 +14,7 @@ import { DebriefRepository } from './debrief.repository';
 export class DebriefService {
   constructor(
     private readonly access: ResuscitationAccess,
-    private readonly data: ClinicalDataRepository,
+    private readonly data: ClinicalRecordsService,
     private readonly repo: DebriefRepository,
     private readonly pool: WorkPool,
   ) {}

@@ -5,17 +5,17 @@ import {
   type CreateAmendment,
   eventSchema,
   type Resuscitation,
+  type ResusEvent,
 } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { badRequest, conflict, forbidden } from '../../common/errors';
 import type { Knex } from 'knex';
-import { AuditRepository } from '../audit/audit.repository';
-import { ClinicalDataRepository } from '../resuscitations/clinical-data.repository';
-import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
+import { AuditService } from '../audit/audit.service';
 import {
+  ClinicalRecordsService,
   type ResuscitationRow,
-  ResuscitationsRepository,
-} from '../resuscitations/resuscitations.repository';
+} from '../resuscitations/clinical-records.service';
+import { ResuscitationAccess } from '../resuscitations/resuscitation-access.service';
 import { toResuscitation } from '../resuscitations/resuscitations.service';
 import { SummariesService } from '../summaries/summaries.service';
 import { DebriefRepository } from './debrief.repository';
@@ -42,10 +42,9 @@ function assertClosingDetails(record: ResuscitationRow): void {
 export class SigningService {
   constructor(
     private readonly access: ResuscitationAccess,
-    private readonly records: ResuscitationsRepository,
-    private readonly data: ClinicalDataRepository,
+    private readonly records: ClinicalRecordsService,
     private readonly repo: DebriefRepository,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
     private readonly summaries: SummariesService,
   ) {}
 
@@ -92,7 +91,7 @@ export class SigningService {
     const record = await this.leadRecord(user, id);
     if (record.status !== 'signed')
       throw conflict('This record is not signed yet: edit it directly instead of amending');
-    const events = this.validEvents(id, body.events ?? [], user, deviceId);
+    const events = this.validEvents(id, body.events ?? []);
     const fields = body.fields ?? {};
     if (fields.unitId && !(await this.records.unitBelongsToSite(fields.unitId, record.siteId)))
       throw badRequest('fields.unitId: this unit is not part of the site', [
@@ -111,15 +110,15 @@ export class SigningService {
           resuscitationId: id,
           reason: body.reason,
           fields,
-          eventIds: events.map((e) => e.id as string),
+          eventIds: events.map((e) => e.id),
           createdBy: user.id,
         },
         trx,
       );
-      const rows = events.map((e) => ({ ...e, amendmentId }));
-      if ((await this.data.insertNew('resuscitationEvents', rows, trx)) !== rows.length)
+      const meta = { resuscitationId: id, recordedBy: user.id, deviceId, amendmentId };
+      if ((await this.records.insertEvents(events, meta, trx)) !== events.length)
         throw conflict('An event with one of these ids already exists');
-      if (Object.keys(fields).length > 0) await this.records.update(id, fields, trx);
+      if (Object.keys(fields).length > 0) await this.records.amendFields(id, fields, trx);
       await this.auditAmendment(user, id, amendmentId, body, deviceId, trx);
       await this.summaries.write(id, trx);
     });
@@ -129,30 +128,13 @@ export class SigningService {
   }
 
   /** Each added event must pass the same schema as a recorded one; all or nothing. */
-  private validEvents(
-    id: string,
-    events: NonNullable<CreateAmendment['events']>,
-    user: AuthUser,
-    deviceId?: string,
-  ) {
+  private validEvents(id: string, events: NonNullable<CreateAmendment['events']>): ResusEvent[] {
     return events.map((raw, i) => {
       const parsed = eventSchema.safeParse({ ...raw, resuscitationId: id });
-      if (!parsed.success) {
-        const issue = parsed.error.issues[0];
-        const path = `events.${i}.${issue.path.map(String).join('.')}`;
-        throw badRequest(`${path}: ${issue.message}`, [{ path, message: issue.message }]);
-      }
-      const e = parsed.data;
-      return {
-        id: e.id,
-        resuscitationId: id,
-        at: e.at,
-        kind: e.kind,
-        data: JSON.stringify(e.data),
-        recordedBy: user.id,
-        deviceId: deviceId ?? null,
-        amendment: true,
-      } as Record<string, unknown>;
+      if (parsed.success) return parsed.data;
+      const issue = parsed.error.issues[0];
+      const path = `events.${i}.${issue.path.map(String).join('.')}`;
+      throw badRequest(`${path}: ${issue.message}`, [{ path, message: issue.message }]);
     });
   }
 

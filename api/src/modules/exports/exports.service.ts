@@ -3,7 +3,7 @@ import type { Debrief } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { forbidden } from '../../common/errors';
 import { APP_CONFIG, type AppConfig } from '../../config';
-import { AuditRepository } from '../audit/audit.repository';
+import { AuditService } from '../audit/audit.service';
 import { DebriefService } from '../debrief/debrief.service';
 import { WorkPool } from '../work-pool/work-pool.service';
 import { type FhirBundle, toFhirBundle } from './fhir/fhir-bundle';
@@ -18,7 +18,7 @@ import { appVersion } from './version';
 export class ExportsService {
   constructor(
     private readonly debrief: DebriefService,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
     @Inject(APP_CONFIG) private readonly config: AppConfig,
     private readonly pool: WorkPool,
   ) {}

@@ -1,45 +1,15 @@
 import type { DetectedBreath } from '@upstroke/capno';
 import type { MonitorImport } from '@upstroke/contracts';
-import { randomUUID } from 'node:crypto';
-import type { ImportRow } from './imports.repository';
-import type { AssembledChunk } from './waveform-assembler';
-
-/** A waveform chunk row on the file's clock (the service shifts it once the offset is known). */
-export function toChunkRow(c: AssembledChunk, resuscitationId: string, importId: string) {
-  return {
-    id: randomUUID(),
-    resuscitationId,
-    startAt: new Date(c.startMs),
-    sampleRateHz: c.sampleRateHz,
-    unit: 'mmHg' as const,
-    sampleCount: c.values.length,
-    samples: Buffer.from(c.values.buffer, c.values.byteOffset, c.values.byteLength),
-    source: 'import',
-    importId,
-  };
-}
+import type { ImportedEtco2, ImportRow } from './imports.repository';
 
 /** Per-breath EtCO2 values (mmHg) at aligned times: `fileStartMs` + breath time − offset. */
-export function toEtco2Rows(
+export function alignedEtco2(
   breaths: readonly DetectedBreath[],
-  o: {
-    resuscitationId: string;
-    importId: string;
-    fileStartMs: number;
-    offsetSec: number;
-    userId: string;
-  },
-) {
+  o: { fileStartMs: number; offsetSec: number },
+): ImportedEtco2[] {
   return breaths.map((b) => ({
-    id: randomUUID(),
-    resuscitationId: o.resuscitationId,
     at: new Date(o.fileStartMs + (b.tSec - o.offsetSec) * 1000),
-    value: Math.round(b.etco2MmHg * 100) / 100,
-    unit: 'mmHg',
-    valueMmhg: b.etco2MmHg,
-    source: 'import',
-    importId: o.importId,
-    recordedBy: o.userId,
+    mmHg: b.etco2MmHg,
   }));
 }
 

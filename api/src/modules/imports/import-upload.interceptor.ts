@@ -12,7 +12,7 @@ import { IMPORT_MAX_BYTES } from '@upstroke/contracts';
 import { EMPTY, finalize, type Observable } from 'rxjs';
 import type { AuthUser } from '../../common/auth.decorators';
 import { badRequest, DomainError } from '../../common/errors';
-import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
+import { ResuscitationAccess } from '../resuscitations/resuscitation-access.service';
 
 const MultipartFile = FileInterceptor('file', {
   // On disk, not in memory: a 50 MB file must not cost 50 MB of heap per upload.

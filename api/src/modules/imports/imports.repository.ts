@@ -1,6 +1,21 @@
+import { randomUUID } from 'node:crypto';
 import { Inject, Injectable } from '@nestjs/common';
 import type { Co2Unit } from '@upstroke/contracts';
+import type { AssembledChunk } from '../../common/monitor-file/waveform-assembler';
 import { KNEX, type Db } from '../../db/knex';
+
+/** Which record and file imported samples belong to, and who imported it. */
+export interface ImportMeta {
+  resuscitationId: string;
+  importId: string;
+  recordedBy: string;
+}
+
+/** One per-breath EtCO2 value of a file, at its aligned time. */
+export interface ImportedEtco2 {
+  at: Date;
+  mmHg: number;
+}
 
 export interface ImportRow {
   id: string;
@@ -58,11 +73,36 @@ export class ImportsRepository {
     await trx('imports').where({ id }).update(patch);
   }
 
-  async insertChunks(rows: object[], trx: Db): Promise<void> {
-    if (rows.length > 0) await trx('waveformChunks').insert(rows);
+  /** Capnogram chunks on the file's clock, samples stored as float32 (mmHg). */
+  async insertChunks(chunks: readonly AssembledChunk[], meta: ImportMeta, trx: Db): Promise<void> {
+    if (chunks.length === 0) return;
+    await trx('waveformChunks').insert(
+      chunks.map((c) => ({
+        id: randomUUID(),
+        resuscitationId: meta.resuscitationId,
+        startAt: new Date(c.startMs),
+        sampleRateHz: c.sampleRateHz,
+        unit: 'mmHg',
+        sampleCount: c.values.length,
+        samples: Buffer.from(c.values.buffer, c.values.byteOffset, c.values.byteLength),
+        source: 'import',
+        importId: meta.importId,
+      })),
+    );
   }
 
-  async insertEtco2(rows: object[], trx: Db): Promise<void> {
+  async insertEtco2(values: readonly ImportedEtco2[], meta: ImportMeta, trx: Db): Promise<void> {
+    const rows = values.map((v) => ({
+      id: randomUUID(),
+      resuscitationId: meta.resuscitationId,
+      at: v.at,
+      value: Math.round(v.mmHg * 100) / 100,
+      unit: 'mmHg',
+      valueMmhg: v.mmHg,
+      source: 'import',
+      importId: meta.importId,
+      recordedBy: meta.recordedBy,
+    }));
     for (let i = 0; i < rows.length; i += 2000)
       await trx('etco2Samples').insert(rows.slice(i, i + 2000));
   }

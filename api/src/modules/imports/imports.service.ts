@@ -6,12 +6,15 @@ import type { List, MonitorImport } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { badRequest, conflict, DomainError, notFound } from '../../common/errors';
 import type { Db } from '../../db/knex';
-import { AuditRepository } from '../audit/audit.repository';
-import { ClinicalDataRepository } from '../resuscitations/clinical-data.repository';
-import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
-import { toChunkRow, toEtco2Rows, toMonitorImport } from './import-rows';
+import { AuditService } from '../audit/audit.service';
+import { ClinicalRecordsService } from '../resuscitations/clinical-records.service';
+import { ResuscitationAccess } from '../resuscitations/resuscitation-access.service';
+import { alignedEtco2, toMonitorImport } from './import-rows';
 import { type ImportRow, ImportsRepository } from './imports.repository';
-import { parseMonitorFile, type ParsedMonitorFile } from './parse-monitor-file';
+import {
+  parseMonitorFile,
+  type ParsedMonitorFile,
+} from '../../common/monitor-file/parse-monitor-file';
 
 export interface Upload {
   path: string;
@@ -36,9 +39,9 @@ const isUniqueViolation = (e: unknown) => (e as { code?: string } | null)?.code 
 export class ImportsService {
   constructor(
     private readonly imports: ImportsRepository,
-    private readonly data: ClinicalDataRepository,
+    private readonly data: ClinicalRecordsService,
     private readonly access: ResuscitationAccess,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
   ) {}
 
   async list(user: AuthUser, id: string): Promise<List<MonitorImport>> {
@@ -58,11 +61,9 @@ export class ImportsService {
     const importId = randomUUID();
     try {
       const row = await this.imports.transaction(async (trx) => {
+        const meta = { resuscitationId: id, importId, recordedBy: user.id };
         const parsed = await parseMonitorFile(createReadStream(upload.path), (chunks) =>
-          this.imports.insertChunks(
-            chunks.map((c) => toChunkRow(c, id, importId)),
-            trx,
-          ),
+          this.imports.insertChunks(chunks, meta, trx),
         );
         if (parsed.errors.length > 0) throw rejected(parsed, upload.originalName);
         return this.store(trx, { user, id, importId, parsed, sha256, upload, shocksSec });
@@ -121,14 +122,9 @@ export class ImportsService {
     );
     const offsetSec = alignment?.offsetSec ?? 0;
     if (offsetSec !== 0) await this.imports.shiftSamples(a.importId, -offsetSec, trx);
-    const etco2 = toEtco2Rows(p.breaths, {
-      resuscitationId: a.id,
-      importId: a.importId,
-      fileStartMs: p.firstMs,
-      offsetSec,
-      userId: a.user.id,
-    });
-    await this.imports.insertEtco2(etco2, trx);
+    const etco2 = alignedEtco2(p.breaths, { fileStartMs: p.firstMs, offsetSec });
+    const meta = { resuscitationId: a.id, importId: a.importId, recordedBy: a.user.id };
+    await this.imports.insertEtco2(etco2, meta, trx);
     const row = await this.imports.insert(
       {
         id: a.importId,

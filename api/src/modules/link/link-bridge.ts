@@ -1,8 +1,8 @@
 import type { AddressInfo } from 'node:net';
 import type { Readable } from 'node:stream';
 import { WebSocketServer } from 'ws';
-import { parseMonitorFile } from '../imports/parse-monitor-file';
-import type { LineError } from '../imports/monitor-csv';
+import { parseMonitorFile } from '../../common/monitor-file/parse-monitor-file';
+import type { LineError } from '../../common/monitor-file/monitor-csv';
 import { type LinkSource, startPacedLink } from './paced-link';
 
 export interface BridgeOptions {

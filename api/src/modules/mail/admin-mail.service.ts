@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import type { MailOverview, MailSinkMessage, MailSinkMessageDetail } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { notFound } from '../../common/errors';
-import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
+import { AdminScopeService } from '../admin-scope/admin-scope.service';
 import { MailSinkRepository, type SinkRow } from './mail-sink.repository';
 import { OutboxRepository } from './outbox.repository';
 import { parseMessage } from './parse-message';
@@ -22,7 +22,7 @@ function toMessage(row: SinkRow): MailSinkMessage {
 export class AdminMailService {
   constructor(
     private readonly mail: MailSinkRepository,
-    private readonly scope: AdminScopeRepository,
+    private readonly scope: AdminScopeService,
     private readonly outboxRows: OutboxRepository,
   ) {}
 

@@ -1,11 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { KNEX, type Db } from '../../db/knex';
-import {
-  type AdminScope,
-  onlyManagedRecipients,
-  scopeOutbox,
-} from '../admin-scope/admin-scope.repository';
+import { type AdminScope, onlyManagedRecipients, scopeOutbox } from '../../db/admin-scope.sql';
 
 export interface SinkRow {
   id: number;

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { Inject, Injectable } from '@nestjs/common';
 import { KNEX, type Db } from '../../db/knex';
-import { type AdminScope, scopeOutbox } from '../admin-scope/admin-scope.repository';
+import { type AdminScope, scopeOutbox } from '../../db/admin-scope.sql';
 
 export interface OutboxRow {
   id: string;

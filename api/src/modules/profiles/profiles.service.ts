@@ -11,7 +11,7 @@ import {
 import { type AuthUser, canSeeSite } from '../../common/auth.decorators';
 import { forbidden, notFound } from '../../common/errors';
 import type { Db } from '../../db/knex';
-import { AuditRepository } from '../audit/audit.repository';
+import { AuditService } from '../audit/audit.service';
 import { type ProfileRow, ProfilesRepository } from './profiles.repository';
 
 export function toProfile(row: ProfileRow): ProtocolProfile {
@@ -32,7 +32,7 @@ export function toProfile(row: ProfileRow): ProtocolProfile {
 export class ProfilesService {
   constructor(
     private readonly profiles: ProfilesRepository,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
   ) {}
 
   async list(admin: AuthUser, siteId?: string): Promise<List<ProtocolProfile>> {

@@ -35,39 +35,10 @@ export interface Etco2Row {
   deviceId: string | null;
 }
 
-/** Events, EtCO2 values and waveform chunks: append-only, idempotent on their ids. */
+/** Reads of events, EtCO2 values and waveform chunks (writes: `EntriesRepository`). */
 @Injectable()
 export class ClinicalDataRepository {
   constructor(@Inject(KNEX) private readonly db: Db) {}
-
-  /** Inserts rows whose id is new; returns how many were added (the rest were replays). */
-  async insertNew(
-    table: 'resuscitationEvents' | 'etco2Samples' | 'waveformChunks',
-    rows: object[],
-    trx?: Db,
-  ): Promise<number> {
-    if (rows.length === 0) return 0;
-    const added = await (trx ?? this.db)(table)
-      .insert(rows)
-      .onConflict('id')
-      .ignore()
-      .returning('id');
-    return added.length;
-  }
-
-  /** Ids among `ids` already stored under another record (a client bug or a forged id). */
-  async idsOwnedElsewhere(
-    table: 'resuscitationEvents' | 'etco2Samples' | 'waveformChunks',
-    ids: string[],
-    resuscitationId: string,
-  ): Promise<Set<string>> {
-    if (ids.length === 0) return new Set();
-    const rows = await this.db(table)
-      .whereIn('id', ids)
-      .whereNot({ resuscitationId })
-      .select<{ id: string }[]>('id');
-    return new Set(rows.map((r) => r.id));
-  }
 
   async events(resuscitationId: string): Promise<EventRow[]> {
     return this.db<EventRow>('resuscitationEvents')

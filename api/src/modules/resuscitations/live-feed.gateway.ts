@@ -11,7 +11,7 @@ import { LIVE_FEED_PATH, type LiveFeedMessage, liveFeedSubscribeSchema } from '@
 import { type RawData, WebSocket, WebSocketServer } from 'ws';
 import { AuthService } from '../auth/auth.service';
 import { LiveFeed } from './live-feed';
-import { ResuscitationAccess } from './resuscitation-access';
+import { ResuscitationAccess } from './resuscitation-access.service';
 
 /** A socket that has not subscribed within this time is closed. */
 const SUBSCRIBE_WITHIN_MS = 10_000;

@@ -1,8 +1,7 @@
 import { Injectable } from '@nestjs/common';
-import type { LiveFeedEntries } from '@upstroke/contracts';
+import type { Etco2Sample, LiveFeedEntries, ResusEvent } from '@upstroke/contracts';
 
 type Listener = (entries: LiveFeedEntries) => void;
-type Row = Record<string, unknown>;
 
 /**
  * Who is watching which record, in this process: the sync hands it what it has just stored
@@ -22,36 +21,42 @@ export class LiveFeed {
     };
   }
 
-  /** Stored event or EtCO2 rows (as the sync writes them) to the record's watchers. */
-  publish(resuscitationId: string, table: string, rows: readonly Row[]): void {
-    const set = this.listeners.get(resuscitationId);
-    if (!set || rows.length === 0) return;
-    const message: LiveFeedEntries = {
+  /** Events just stored, to the record's other tablets. */
+  publishEvents(resuscitationId: string, events: readonly ResusEvent[]): void {
+    this.send(resuscitationId, {
       type: 'entries',
       resuscitationId,
-      events: table === 'resuscitationEvents' ? rows.map(eventOf) : [],
-      etco2: table === 'etco2Samples' ? rows.map(valueOf) : [],
-    };
-    if (message.events.length + message.etco2.length === 0) return;
+      events: events.map((e) => ({
+        id: e.id,
+        at: e.at,
+        kind: e.kind,
+        data: e.data,
+        deviceId: e.deviceId ?? null,
+      })),
+      etco2: [],
+    });
+  }
+
+  /** EtCO2 values just stored, to the record's other tablets. */
+  publishEtco2(resuscitationId: string, values: readonly Etco2Sample[]): void {
+    this.send(resuscitationId, {
+      type: 'entries',
+      resuscitationId,
+      events: [],
+      etco2: values.map((v) => ({
+        id: v.id,
+        at: v.at,
+        value: v.value,
+        unit: v.unit,
+        source: v.source,
+        deviceId: v.deviceId ?? null,
+      })),
+    });
+  }
+
+  private send(resuscitationId: string, message: LiveFeedEntries): void {
+    const set = this.listeners.get(resuscitationId);
+    if (!set || message.events.length + message.etco2.length === 0) return;
     for (const listener of set) listener(message);
   }
-}
-
-const str = (v: unknown) => String(v);
-const deviceOf = (r: Row) => (typeof r.deviceId === 'string' ? r.deviceId : null);
-
-function eventOf(r: Row): LiveFeedEntries['events'][number] {
-  const data = typeof r.data === 'string' ? (JSON.parse(r.data) as Row) : (r.data as Row);
-  return { id: str(r.id), at: str(r.at), kind: r.kind as never, data, deviceId: deviceOf(r) };
-}
-
-function valueOf(r: Row): LiveFeedEntries['etco2'][number] {
-  return {
-    id: str(r.id),
-    at: str(r.at),
-    value: Number(r.value),
-    unit: r.unit as never,
-    source: r.source as never,
-    deviceId: deviceOf(r),
-  };
 }

@@ -3,7 +3,9 @@ import { AuthModule } from '../auth/auth.module';
 import { LiveFeed } from './live-feed';
 import { LiveFeedGateway } from './live-feed.gateway';
 import { ClinicalDataRepository } from './clinical-data.repository';
-import { ResuscitationAccess } from './resuscitation-access';
+import { ClinicalRecordsService } from './clinical-records.service';
+import { EntriesRepository } from './entries.repository';
+import { ResuscitationAccess } from './resuscitation-access.service';
 import { ResuscitationsController } from './resuscitations.controller';
 import { ResuscitationsRepository } from './resuscitations.repository';
 import { ResuscitationsService } from './resuscitations.service';
@@ -15,12 +17,14 @@ import { SyncService } from './sync.service';
   providers: [
     ResuscitationsRepository,
     ClinicalDataRepository,
+    EntriesRepository,
+    ClinicalRecordsService,
     ResuscitationAccess,
     ResuscitationsService,
     SyncService,
     LiveFeed,
     LiveFeedGateway,
   ],
-  exports: [ResuscitationsRepository, ClinicalDataRepository, ResuscitationAccess],
+  exports: [ClinicalRecordsService, ResuscitationAccess],
 })
 export class ResuscitationsModule {}

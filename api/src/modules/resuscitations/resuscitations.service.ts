@@ -9,9 +9,9 @@ import type {
 } from '@upstroke/contracts';
 import { type AuthUser, canSeeSite } from '../../common/auth.decorators';
 import { badRequest, conflict, forbidden } from '../../common/errors';
-import { AuditRepository } from '../audit/audit.repository';
+import { AuditService } from '../audit/audit.service';
 import { ClinicalDataRepository } from './clinical-data.repository';
-import { ResuscitationAccess } from './resuscitation-access';
+import { ResuscitationAccess } from './resuscitation-access.service';
 import { type ResuscitationRow, ResuscitationsRepository } from './resuscitations.repository';
 
 export function toResuscitation(
@@ -33,7 +33,7 @@ export class ResuscitationsService {
     private readonly records: ResuscitationsRepository,
     private readonly data: ClinicalDataRepository,
     private readonly access: ResuscitationAccess,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
   ) {}
 
   /** Idempotent on the client's id: a replay returns the stored record unchanged. */

@@ -7,19 +7,18 @@ import {
   PLAUSIBLE,
   waveformChunkSchema,
 } from '@upstroke/contracts';
+import type { ResusEvent, WaveformChunk } from '@upstroke/contracts';
 import type { z } from 'zod';
-import type { AuthUser } from '../../common/auth.decorators';
+import type { Etco2Entry } from './entries.repository';
 
-/** What an item's row needs besides the item: the record it goes to and who sent it. */
+/** What checking an item needs besides the item: the record it goes to. */
 export interface RowContext {
-  user: AuthUser;
   recordId: string;
   arrestAt: Date;
-  deviceId?: string;
-  clockOffsetMs?: number;
 }
 
-export type RowResult = { row: Record<string, unknown> } | { error: string };
+/** A synced item, validated for its record, or why it was refused. */
+export type RowResult<T> = { value: T } | { error: string };
 
 function reasonOf(error: z.ZodError): string {
   const issue = error.issues[0];
@@ -42,7 +41,7 @@ function timeError(field: string, at: string, c: RowContext): { error: string } 
   return problem ? { error: `${field}: ${problem}` } : null;
 }
 
-export function eventRow(raw: unknown, c: RowContext): RowResult {
+export function eventRow(raw: unknown, c: RowContext): RowResult<ResusEvent> {
   const e = parse(eventSchema, { resuscitationId: c.recordId, ...(raw as object) });
   if (isError(e)) return e;
   if (e.resuscitationId !== c.recordId)
@@ -52,39 +51,20 @@ export function eventRow(raw: unknown, c: RowContext): RowResult {
   const { replacement } = e.data as { replacement?: { at: string } };
   const replaced = replacement && timeError('data.replacement.at', replacement.at, c);
   if (replaced) return replaced;
-  return {
-    row: {
-      id: e.id,
-      resuscitationId: c.recordId,
-      at: e.at,
-      kind: e.kind,
-      data: JSON.stringify(e.data),
-      recordedBy: c.user.id,
-      deviceId: e.deviceId ?? c.deviceId ?? null,
-      clockOffsetMs: c.clockOffsetMs ?? null,
-    },
-  };
+  return { value: e };
 }
 
-export function etco2Row(raw: unknown, c: RowContext): RowResult {
+export function etco2Row(raw: unknown, c: RowContext): RowResult<Etco2Entry> {
   const s = parse(etco2SampleSchema, raw);
   if (isError(s)) return s;
   const valueMmhg = toMmHg(s.value, s.unit);
   if (valueMmhg > 150) return { error: 'value: above 150 mmHg' };
   const late = timeError('at', s.at, c);
   if (late) return late;
-  return {
-    row: {
-      ...s,
-      resuscitationId: c.recordId,
-      valueMmhg,
-      recordedBy: c.user.id,
-      deviceId: s.deviceId ?? c.deviceId ?? null,
-    },
-  };
+  return { value: { ...s, valueMmhg } };
 }
 
-export function waveformRow(raw: unknown, c: RowContext): RowResult {
+export function waveformRow(raw: unknown, c: RowContext): RowResult<WaveformChunk> {
   const w = parse(waveformChunkSchema, raw);
   if (isError(w)) return w;
   const { min, max } = PLAUSIBLE.waveformMmHg;
@@ -96,17 +76,5 @@ export function waveformRow(raw: unknown, c: RowContext): RowResult {
   const endAt = new Date(Date.parse(w.startAt) + (w.values.length / w.sampleRateHz) * 1000);
   const late = timeError('startAt', w.startAt, c) ?? timeError('end', endAt.toISOString(), c);
   if (late) return late;
-  return {
-    row: {
-      id: w.id,
-      resuscitationId: c.recordId,
-      startAt: w.startAt,
-      sampleRateHz: w.sampleRateHz,
-      unit: w.unit,
-      seq: w.seq ?? null,
-      sampleCount: w.values.length,
-      samples: Buffer.from(new Float32Array(w.values).buffer),
-      source: 'stream',
-    },
-  };
+  return { value: w };
 }

@@ -1,13 +1,20 @@
 import { Injectable } from '@nestjs/common';
 import type { BatchResult, DiscardRefused, DiscardResult } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
-import { AuditRepository } from '../audit/audit.repository';
-import { ClinicalDataRepository } from './clinical-data.repository';
+import { AuditService } from '../audit/audit.service';
+import { type EntryMeta, EntriesRepository, type EntryTable } from './entries.repository';
 import { LiveFeed } from './live-feed';
-import { ResuscitationAccess } from './resuscitation-access';
+import { ResuscitationAccess } from './resuscitation-access.service';
 import { etco2Row, eventRow, type RowContext, type RowResult, waveformRow } from './sync-rows';
 
-type Table = 'resuscitationEvents' | 'etco2Samples' | 'waveformChunks';
+/** One kind of entry: its table, how an item is checked, how valid ones are stored. */
+interface EntryKind<T extends { id: string }> {
+  table: EntryTable;
+  check: (raw: unknown, c: RowContext) => RowResult<T>;
+  insert: (items: T[], meta: EntryMeta) => Promise<number>;
+  /** Tells the record's other tablets (events and EtCO2 values; not the capnogram). */
+  publish?: (id: string, items: T[]) => void;
+}
 
 export interface SyncContext {
   deviceId?: string;
@@ -26,22 +33,36 @@ function idOf(item: unknown, index: number): string {
 @Injectable()
 export class SyncService {
   constructor(
-    private readonly data: ClinicalDataRepository,
+    private readonly entries: EntriesRepository,
     private readonly access: ResuscitationAccess,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
     private readonly feed: LiveFeed,
   ) {}
 
   events(user: AuthUser, id: string, items: unknown[], ctx: SyncContext): Promise<BatchResult> {
-    return this.ingest(user, id, items, ctx, 'resuscitationEvents', eventRow);
+    return this.ingest(user, id, items, ctx, {
+      table: 'resuscitationEvents',
+      check: eventRow,
+      insert: (events, meta) => this.entries.insertEvents(events, meta),
+      publish: (rid, events) => this.feed.publishEvents(rid, events),
+    });
   }
 
   etco2(user: AuthUser, id: string, items: unknown[], ctx: SyncContext): Promise<BatchResult> {
-    return this.ingest(user, id, items, ctx, 'etco2Samples', etco2Row);
+    return this.ingest(user, id, items, ctx, {
+      table: 'etco2Samples',
+      check: etco2Row,
+      insert: (values, meta) => this.entries.insertEtco2(values, meta),
+      publish: (rid, values) => this.feed.publishEtco2(rid, values),
+    });
   }
 
   waveform(user: AuthUser, id: string, items: unknown[], ctx: SyncContext): Promise<BatchResult> {
-    return this.ingest(user, id, items, ctx, 'waveformChunks', waveformRow);
+    return this.ingest(user, id, items, ctx, {
+      table: 'waveformChunks',
+      check: waveformRow,
+      insert: (chunks, meta) => this.entries.insertWaveform(chunks, meta),
+    });
   }
 
   /**
@@ -60,55 +81,64 @@ export class SyncService {
     return { discarded: body.items.length };
   }
 
-  private async ingest(
+  private async ingest<T extends { id: string }>(
     user: AuthUser,
     id: string,
     items: unknown[],
     ctx: SyncContext,
-    table: Table,
-    toRow: (raw: unknown, c: RowContext) => RowResult,
+    kind: EntryKind<T>,
   ): Promise<BatchResult> {
     const record = await this.access.writable(user, id);
-    const c: RowContext = { ...ctx, user, recordId: id, arrestAt: record.arrestAt };
+    const c: RowContext = { recordId: id, arrestAt: record.arrestAt };
     const rejected: BatchResult['rejected'] = [];
-    const rows: Record<string, unknown>[] = [];
+    const valid: T[] = [];
     const seen = new Set<string>();
     items.forEach((raw, i) => {
-      const result = toRow(raw, c);
+      const result = kind.check(raw, c);
       if ('error' in result) return rejected.push({ id: idOf(raw, i), reason: result.error });
-      const { row } = result;
-      if (seen.has(row.id as string)) return; // repeated inside one batch: a duplicate
-      seen.add(row.id as string);
-      rows.push(row);
+      const { value } = result;
+      if (seen.has(value.id)) return; // repeated inside one batch: a duplicate
+      seen.add(value.id);
+      valid.push(value);
     });
-    const foreign = await this.data.idsOwnedElsewhere(
-      table,
-      rows.map((r) => r.id as string),
+    const foreign = await this.entries.idsOwnedElsewhere(
+      kind.table,
+      valid.map((v) => v.id),
       id,
     );
-    const own = rows.filter((r) => !foreign.has(r.id as string));
+    const own = valid.filter((v) => !foreign.has(v.id));
     for (const fid of foreign)
       rejected.push({ id: fid, reason: 'id: already used by another record' });
-    const accepted = await this.data.insertNew(table, own);
+    const meta = { resuscitationId: id, recordedBy: user.id, ...ctx };
+    const accepted = await kind.insert(own, meta);
     if (accepted < own.length) {
       // Another record may have taken an id between the look-up and the insert.
-      const late = await this.data.idsOwnedElsewhere(table, [...seen], id);
+      const late = await this.entries.idsOwnedElsewhere(kind.table, [...seen], id);
       for (const fid of late)
         if (!foreign.has(fid))
           rejected.push({ id: fid, reason: 'id: already used by another record' });
     }
-    // Other tablets showing this record hear at once (duplicates are harmless to them).
-    if (accepted > 0) this.feed.publish(id, table, own);
-    if (accepted > 0) {
-      await this.audit.insert({
-        userId: user.id,
-        action: 'append',
-        entity: table,
-        resuscitationId: id,
-        deviceId: ctx.deviceId,
-        details: { accepted, clockOffsetMs: ctx.clockOffsetMs ?? null },
-      });
-    }
+    if (accepted > 0) await this.afterAppend(user, id, ctx, kind, own, accepted);
     return { accepted, duplicates: items.length - rejected.length - accepted, rejected };
+  }
+
+  private async afterAppend<T extends { id: string }>(
+    user: AuthUser,
+    id: string,
+    ctx: SyncContext,
+    kind: EntryKind<T>,
+    own: T[],
+    accepted: number,
+  ): Promise<void> {
+    // Other tablets showing this record hear at once (duplicates are harmless to them).
+    kind.publish?.(id, own);
+    await this.audit.insert({
+      userId: user.id,
+      action: 'append',
+      entity: kind.table,
+      resuscitationId: id,
+      deviceId: ctx.deviceId,
+      details: { accepted, clockOffsetMs: ctx.clockOffsetMs ?? null },
+    });
   }
 }

@@ -2,8 +2,8 @@ import { Injectable } from '@nestjs/common';
 import type { Review, ReviewInput, ReviewQueueQuery } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { conflict, forbidden } from '../../common/errors';
-import { AuditRepository } from '../audit/audit.repository';
-import { ResuscitationAccess } from '../resuscitations/resuscitation-access';
+import { AuditService } from '../audit/audit.service';
+import { ResuscitationAccess } from '../resuscitations/resuscitation-access.service';
 import { type ReviewRow, ReviewsRepository } from './reviews.repository';
 
 const iso = (d: unknown) => (d instanceof Date ? d.toISOString() : (d ?? null));
@@ -26,7 +26,7 @@ export class ReviewsService {
   constructor(
     private readonly repo: ReviewsRepository,
     private readonly access: ResuscitationAccess,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
   ) {}
 
   async queue(user: AuthUser, q: ReviewQueueQuery) {

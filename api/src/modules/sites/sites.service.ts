@@ -13,10 +13,10 @@ import {
 import { type AuthUser, canSeeSite } from '../../common/auth.decorators';
 import { conflict, notFound } from '../../common/errors';
 import type { Db } from '../../db/knex';
-import { AdminScopeRepository } from '../admin-scope/admin-scope.repository';
-import { AuditRepository } from '../audit/audit.repository';
+import { AdminScopeService } from '../admin-scope/admin-scope.service';
+import { AuditService } from '../audit/audit.service';
 import { ProfilesService } from '../profiles/profiles.service';
-import { UsersRepository } from '../users/users.repository';
+import { AccountsService } from '../users/accounts.service';
 import { SitesRepository } from './sites.repository';
 
 const nameTaken = () => conflict('Another site already has this name');
@@ -27,10 +27,10 @@ const unitTaken = () => conflict('This site already has a unit with this name');
 export class SitesService {
   constructor(
     private readonly sites: SitesRepository,
-    private readonly users: UsersRepository,
+    private readonly users: AccountsService,
     private readonly profiles: ProfilesService,
-    private readonly audit: AuditRepository,
-    private readonly scope: AdminScopeRepository,
+    private readonly audit: AuditService,
+    private readonly scope: AdminScopeService,
   ) {}
 
   async list(admin: AuthUser): Promise<List<Site>> {

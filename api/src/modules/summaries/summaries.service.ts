@@ -3,7 +3,7 @@ import { buildSummaryRow } from '@upstroke/capno';
 import type { RecordSummaryRow } from '@upstroke/contracts';
 import type { Knex } from 'knex';
 import { notFound } from '../../common/errors';
-import { ClinicalDataRepository } from '../resuscitations/clinical-data.repository';
+import { ClinicalRecordsService } from '../resuscitations/clinical-records.service';
 import { SummariesRepository } from './summaries.repository';
 
 /**
@@ -15,7 +15,7 @@ import { SummariesRepository } from './summaries.repository';
 @Injectable()
 export class SummariesService {
   constructor(
-    private readonly data: ClinicalDataRepository,
+    private readonly data: ClinicalRecordsService,
     private readonly repo: SummariesRepository,
   ) {}
 

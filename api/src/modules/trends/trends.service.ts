@@ -8,7 +8,7 @@ import type {
 } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { forbidden } from '../../common/errors';
-import { AuditRepository } from '../audit/audit.repository';
+import { AuditService } from '../audit/audit.service';
 import { recordCsvHeader, recordCsvLine } from './trends.csv';
 import type { ScopedFilter } from './trends.queries';
 import { type MonthRow, TrendsRepository } from './trends.repository';
@@ -33,7 +33,7 @@ const measures: Record<TrendMeasure, [keyof MonthRow, keyof MonthRow]> = {
 export class TrendsService {
   constructor(
     private readonly repo: TrendsRepository,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
   ) {}
 
   /** The caller's sites, narrowed by the filter; a site they do not belong to is refused. */

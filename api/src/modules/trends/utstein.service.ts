@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { TrendsFilter, UtsteinLine, UtsteinSummary } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
-import { AuditRepository } from '../audit/audit.repository';
+import { AuditService } from '../audit/audit.service';
 import { utsteinCsv } from './trends.csv';
 import { TrendsRepository } from './trends.repository';
 import { TrendsService } from './trends.service';
@@ -47,7 +47,7 @@ export class UtsteinService {
   constructor(
     private readonly trends: TrendsService,
     private readonly repo: TrendsRepository,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
   ) {}
 
   /** The summary as CSV; audited as an export. */

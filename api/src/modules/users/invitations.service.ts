@@ -5,7 +5,7 @@ import bcrypt from 'bcryptjs';
 import { badRequest } from '../../common/errors';
 import { APP_CONFIG, type AppConfig } from '../../config';
 import type { Db } from '../../db/knex';
-import { AuditRepository } from '../audit/audit.repository';
+import { AuditService } from '../audit/audit.service';
 import { MailService } from '../mail/mail.service';
 import { type InvitationPurpose, InvitationsRepository } from './invitations.repository';
 import { type UserRow, UsersRepository } from './users.repository';
@@ -55,7 +55,7 @@ export class InvitationsService {
     private readonly invitations: InvitationsRepository,
     private readonly users: UsersRepository,
     private readonly mail: MailService,
-    private readonly audit: AuditRepository,
+    private readonly audit: AuditService,
   ) {}
 
   /**

@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { Role } from '@upstroke/contracts';
 import { KNEX, type Db } from '../../db/knex';
-import { managedUserIds } from '../admin-scope/admin-scope.repository';
+import { managedUserIds } from '../../db/admin-scope.sql';
 
 export interface UserRow {
   id: string;

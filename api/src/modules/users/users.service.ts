@@ -5,8 +5,8 @@ import type { AuthUser } from '../../common/auth.decorators';
 import { changesOf } from '../../common/changes';
 import { conflict, forbidden, notFound } from '../../common/errors';
 import type { Db } from '../../db/knex';
-import { AdminScopeRepository, managesUser } from '../admin-scope/admin-scope.repository';
-import { AuditRepository } from '../audit/audit.repository';
+import { AdminScopeService, managesUser } from '../admin-scope/admin-scope.service';
+import { AuditService } from '../audit/audit.service';
 import { InvitationsService } from './invitations.service';
 import { type UserChanges, type UserWithSites, UsersRepository } from './users.repository';
 
@@ -37,8 +37,8 @@ export class UsersService {
   constructor(
     private readonly users: UsersRepository,
     private readonly invitations: InvitationsService,
-    private readonly audit: AuditRepository,
-    private readonly scope: AdminScopeRepository,
+    private readonly audit: AuditService,
+    private readonly scope: AdminScopeService,
   ) {}
 
   /** The user, locked for this transaction, if this admin manages them (else not found). */
