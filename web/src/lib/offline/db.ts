@@ -1,8 +1,8 @@
 import type {
+  ResusEvent,
   AgeGroup,
   Co2Unit,
   Etco2Source,
-  EventKind,
   RecordingContext,
   RosterMember,
 } from '@upstroke/contracts';
@@ -44,14 +44,8 @@ export interface LocalResuscitation {
   createdAt: number;
 }
 
-export interface LocalEvent {
-  id: string;
-  resuscitationId: string;
-  at: string;
-  kind: EventKind;
-  data: Record<string, unknown>;
-  deviceId: string;
-}
+/** An event on the tablet: the contracts' discriminated union, with the device that wrote it. */
+export type LocalEvent = ResusEvent & { deviceId: string };
 
 export interface LocalEtco2 {
   id: string;

@@ -24,16 +24,9 @@ export async function mergeRemoteEntries(
     db.events.bulkGet(newEvents.map((e) => e.id)),
     db.etco2.bulkGet(newValues.map((v) => v.id)),
   ]);
-  const events: LocalEvent[] = newEvents
+  const events = newEvents
     .filter((_, i) => haveEvents[i] === undefined)
-    .map((e) => ({
-      id: e.id,
-      resuscitationId,
-      at: e.at,
-      kind: e.kind,
-      data: e.data,
-      deviceId: e.deviceId ?? 'server',
-    }));
+    .map((e) => fromServer(e, resuscitationId));
   const values: LocalEtco2[] = newValues
     .filter((_, i) => haveValues[i] === undefined)
     .map((v) => ({
@@ -59,4 +52,14 @@ export async function mergeRemoteEntries(
     await db.acks.bulkPut(acks);
   });
   return events.length + values.length;
+}
+
+/**
+ * An event as the server answers it, in this tablet's store. The server checked its data
+ * against its kind's contract when it stored it; it is not re-checked here, because a tablet
+ * running an older app would then drop another tablet's entry (a drug given, a shock).
+ */
+function fromServer(e: RemoteEntries['events'][number], resuscitationId: string): LocalEvent {
+  const { id, at, kind, data } = e;
+  return { id, resuscitationId, at, kind, data, deviceId: e.deviceId ?? 'server' } as LocalEvent;
 }

@@ -1,9 +1,10 @@
-import type {
-  Co2Unit,
-  Etco2Source,
-  EventData,
-  EventKind,
-  PatchResuscitation,
+import {
+  type Co2Unit,
+  type Etco2Source,
+  type EventData,
+  type EventKind,
+  eventOfKind,
+  type PatchResuscitation,
 } from '@upstroke/contracts';
 import { deviceId } from '../device';
 import {
@@ -14,7 +15,7 @@ import {
   offlineDb,
   type OfflineDb,
 } from './db';
-import { addTap, type TapTable, TapWriter } from './tap-writer';
+import { addTap, type Tap, TapWriter } from './tap-writer';
 import { writeSignal } from './write-signal';
 
 /** The page's tap writer: a worker in the browser, this thread where workers are missing. */
@@ -30,12 +31,8 @@ export const tapWriter = new TapWriter(
 );
 
 /** Through the worker for the app's own store; straight in for another (tests). */
-function commitTap(
-  table: TapTable,
-  row: LocalEvent | LocalEtco2,
-  db: OfflineDb | undefined,
-): Promise<number> {
-  return !db || db === offlineDb ? tapWriter.write(table, row) : addTap(db, table, row);
+function commitTap(tap: Tap, db: OfflineDb | undefined): Promise<number> {
+  return !db || db === offlineDb ? tapWriter.write(tap) : addTap(db, tap);
 }
 
 export interface NewResuscitation {
@@ -95,16 +92,18 @@ export async function recordEvent<K extends EventKind>(
   options: { at?: string; db?: OfflineDb } = {},
 ): Promise<LocalEvent> {
   const tappedAt = performance.now();
-  const event: LocalEvent = {
-    id: crypto.randomUUID(),
-    resuscitationId,
-    at: options.at ?? new Date().toISOString(),
+  const event: LocalEvent = eventOfKind(
+    {
+      id: crypto.randomUUID(),
+      resuscitationId,
+      at: options.at ?? new Date().toISOString(),
+      deviceId: deviceId(),
+    },
     kind,
-    data: data as Record<string, unknown>,
-    deviceId: deviceId(),
-  };
+    data,
+  );
   // Resolves once IndexedDB has committed the write (in the worker, off this thread).
-  const committedAt = await commitTap('events', event, options.db);
+  const committedAt = await commitTap({ table: 'events', row: event }, options.db);
   // User Timing entry: tap-to-commit, read by bench/live.bench.ts and the browser's profiler.
   performance.measure('upstroke:tap-commit', { start: tappedAt, end: committedAt });
   writeSignal.emit();
@@ -126,7 +125,7 @@ export async function recordEtco2(
     source: options.source ?? 'manual',
     deviceId: deviceId(),
   };
-  await commitTap('etco2', sample, options.db);
+  await commitTap({ table: 'etco2', row: sample }, options.db);
   writeSignal.emit();
   return sample;
 }

@@ -46,7 +46,7 @@ describe('tap writer', () => {
       () => null,
     );
     const e = event(1);
-    const committedAt = await writer.write('events', e);
+    const committedAt = await writer.write({ table: 'events', row: e });
     expect(committedAt).toBeLessThanOrEqual(performance.now());
     expect(await db.events.get(e.id)).toEqual(e);
   });
@@ -57,7 +57,7 @@ describe('tap writer', () => {
       () => db,
       () => worker as unknown as Worker,
     );
-    const pending = writer.write('events', event(1));
+    const pending = writer.write({ table: 'events', row: event(1) });
     expect(worker.sent).toHaveLength(1);
     const before = performance.now();
     worker.answer(worker.sent[0]);
@@ -73,8 +73,8 @@ describe('tap writer', () => {
       () => worker as unknown as Worker,
     );
     const [a, b] = [event(1), event(2)];
-    const pa = writer.write('events', a);
-    const pb = writer.write('events', b);
+    const pa = writer.write({ table: 'events', row: a });
+    const pb = writer.write({ table: 'events', row: b });
     // The worker stored `a` but died before saying so; `b` never reached IndexedDB.
     await db.events.add(a);
     worker.onerror?.(new Event('error'));
@@ -83,7 +83,7 @@ describe('tap writer', () => {
     expect((await db.events.toArray()).map((r) => r.id).sort()).toEqual([a.id, b.id].sort());
     // Later taps go straight in.
     const c = event(3);
-    await writer.write('events', c);
+    await writer.write({ table: 'events', row: c });
     expect(worker.sent).toHaveLength(2);
     expect(await db.events.count()).toBe(3);
   });
@@ -94,7 +94,7 @@ describe('tap writer', () => {
       () => db,
       () => worker as unknown as Worker,
     );
-    const pending = writer.write('events', event(1));
+    const pending = writer.write({ table: 'events', row: event(1) });
     const { seq } = worker.sent[0];
     worker.onmessage?.({
       data: { seq, ok: false, committedAt: 0, error: 'QuotaExceededError: full' },

@@ -1,12 +1,14 @@
 import type { LocalEtco2, LocalEvent, OfflineDb } from './db';
 
-export type TapTable = 'events' | 'etco2';
+/** One tap: an event or a typed EtCO2 value, with the table it goes to. */
+export type Tap = { table: 'events'; row: LocalEvent } | { table: 'etco2'; row: LocalEtco2 };
 
 /** A tap for the writer worker. */
-export interface TapWrite {
-  seq: number;
-  table: TapTable;
-  row: LocalEvent | LocalEtco2;
+export type TapWrite = Tap & { seq: number };
+
+/** Adds the tap's row to its table (either thread). */
+export function addRow(db: OfflineDb, tap: Tap): Promise<string> {
+  return tap.table === 'events' ? db.events.add(tap.row) : db.etco2.add(tap.row);
 }
 
 /** The worker's answer; `committedAt` is an absolute time (timeOrigin + performance.now()). */
@@ -31,14 +33,9 @@ function isDuplicate(error: unknown): boolean {
  * Adds a tap on this thread; resolves with the commit time. A row already there (the same
  * id, written before a worker failed) counts as written.
  */
-export async function addTap(
-  db: OfflineDb,
-  table: TapTable,
-  row: LocalEvent | LocalEtco2,
-): Promise<number> {
+export async function addTap(db: OfflineDb, tap: Tap): Promise<number> {
   try {
-    if (table === 'events') await db.events.add(row as LocalEvent);
-    else await db.etco2.add(row as LocalEtco2);
+    await addRow(db, tap);
   } catch (error) {
     if (!isDuplicate(error)) throw error;
   }
@@ -68,10 +65,10 @@ export class TapWriter {
   }
 
   /** Resolves once IndexedDB has committed the row, with the commit time on this page's clock. */
-  write(table: TapTable, row: LocalEvent | LocalEtco2): Promise<number> {
+  write(tap: Tap): Promise<number> {
     const worker = this.ensureWorker();
-    if (!worker) return this.direct(table, row);
-    const write: TapWrite = { seq: ++this.seq, table, row };
+    if (!worker) return this.direct(tap);
+    const write: TapWrite = { ...tap, seq: ++this.seq };
     return new Promise((resolve, reject) => {
       this.pending.set(write.seq, { write, resolve, reject });
       worker.postMessage(write);
@@ -106,10 +103,10 @@ export class TapWriter {
     this.worker = null;
     const waiting = [...this.pending.values()];
     this.pending.clear();
-    for (const p of waiting) this.direct(p.write.table, p.write.row).then(p.resolve, p.reject);
+    for (const p of waiting) this.direct(p.write).then(p.resolve, p.reject);
   }
 
-  private direct(table: TapTable, row: LocalEvent | LocalEtco2): Promise<number> {
-    return addTap(this.db(), table, row);
+  private direct(tap: Tap): Promise<number> {
+    return addTap(this.db(), tap);
   }
 }

@@ -5,7 +5,7 @@
  * queries see the new row as if it had been written there.
  */
 import { createOfflineDb } from './db';
-import type { TapWrite, TapWritten } from './tap-writer';
+import { addRow, type TapWrite, type TapWritten } from './tap-writer';
 
 const db = createOfflineDb();
 // Open now, so the first tap does not wait for the database to open.
@@ -13,9 +13,8 @@ void db.open();
 const scope = self as unknown as DedicatedWorkerGlobalScope;
 
 scope.onmessage = (message: MessageEvent<TapWrite>) => {
-  const { seq, table, row } = message.data;
-  const store = table === 'events' ? db.events : db.etco2;
-  store.add(row as never).then(
+  const { seq } = message.data;
+  addRow(db, message.data).then(
     () => reply({ seq, ok: true, committedAt: performance.timeOrigin + performance.now() }),
     (error: unknown) =>
       reply({

@@ -18,8 +18,8 @@ const prefix = 'Reversible cause considered: ';
 /** The causes already ticked in this record, as one string (equal while nothing changes). */
 export function tickedCauses(events: LocalEvent[]): string {
   return events
-    .filter((e) => e.kind === 'note' && String(e.data.text).startsWith(prefix))
-    .map((e) => String(e.data.text).slice(prefix.length))
+    .flatMap((e) => (e.kind === 'note' && e.data.text.startsWith(prefix) ? [e.data.text] : []))
+    .map((text) => text.slice(prefix.length))
     .join('\n');
 }
 

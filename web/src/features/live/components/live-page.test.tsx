@@ -3,6 +3,7 @@ import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { MemoryRouter, Route, Routes } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { type EventData, type EventKind, eventOfKind } from '@upstroke/contracts';
 import { type LocalEvent, offlineDb } from '../../../lib/offline';
 import { LivePage } from './live-page';
 
@@ -14,14 +15,21 @@ vi.setConfig({ testTimeout: 30_000 });
 const id = '7b2c3d4e-5f60-4a1b-8c2d-3e4f5a6b7c8d';
 const minAgo = (m: number) => new Date(Date.now() - m * 60_000).toISOString();
 let n = 0;
-const event = (kind: LocalEvent['kind'], at: string, data: object = {}): LocalEvent => ({
-  id: `0000000${(n += 1)}`.slice(-8) + '-0000-4000-8000-000000000000',
-  resuscitationId: id,
-  at,
-  kind,
-  data: data as Record<string, unknown>,
-  deviceId: 'd',
-});
+const event = <K extends EventKind>(
+  kind: K,
+  at: string,
+  data: EventData<K> = {} as EventData<K>,
+): LocalEvent =>
+  eventOfKind(
+    {
+      id: `0000000${(n += 1)}`.slice(-8) + '-0000-4000-8000-000000000000',
+      resuscitationId: id,
+      at,
+      deviceId: 'd',
+    },
+    kind,
+    data,
+  );
 
 async function seed(events: LocalEvent[]) {
   await offlineDb.resuscitations.put({

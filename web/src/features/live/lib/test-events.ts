@@ -1,3 +1,4 @@
+import { type EventData, type EventKind, eventOfKind } from '@upstroke/contracts';
 import type { LocalEtco2, LocalEvent } from '../../../lib/offline';
 
 /** Test entries of one record, `sec` seconds after 2026-03-04T10:00:00Z. */
@@ -7,13 +8,18 @@ export const ARREST = new Date(T0).toISOString();
 export const atSec = (sec: number) => new Date(T0 + sec * 1000).toISOString();
 
 let n = 0;
-export function ev(
-  kind: LocalEvent['kind'],
+/** An event of `kind`; kinds whose data has required fields name them. */
+export function ev<K extends EventKind>(
+  kind: K,
   sec: number,
-  data: Record<string, unknown> = {},
+  data: EventData<K> = {} as EventData<K>,
 ): LocalEvent {
   n += 1;
-  return { id: `e${n}`, resuscitationId: 'r', at: atSec(sec), kind, data, deviceId: 'd' };
+  return eventOfKind(
+    { id: `e${n}`, resuscitationId: 'r', at: atSec(sec), deviceId: 'd' },
+    kind,
+    data,
+  );
 }
 
 export function typed(
