@@ -21,8 +21,12 @@ export class LiveFeed {
     };
   }
 
-  /** Events just stored, to the record's other tablets. */
-  publishEvents(resuscitationId: string, events: readonly ResusEvent[]): void {
+  /** Events just stored, to the record's other tablets (`device`: the sender's, if unnamed). */
+  publishEvents(
+    resuscitationId: string,
+    events: readonly ResusEvent[],
+    device: string | null,
+  ): void {
     this.send(resuscitationId, {
       type: 'entries',
       resuscitationId,
@@ -31,14 +35,18 @@ export class LiveFeed {
         at: e.at,
         kind: e.kind,
         data: e.data,
-        deviceId: e.deviceId ?? null,
+        deviceId: e.deviceId ?? device,
       })),
       etco2: [],
     });
   }
 
   /** EtCO2 values just stored, to the record's other tablets. */
-  publishEtco2(resuscitationId: string, values: readonly Etco2Sample[]): void {
+  publishEtco2(
+    resuscitationId: string,
+    values: readonly Etco2Sample[],
+    device: string | null,
+  ): void {
     this.send(resuscitationId, {
       type: 'entries',
       resuscitationId,
@@ -49,7 +57,7 @@ export class LiveFeed {
         value: v.value,
         unit: v.unit,
         source: v.source,
-        deviceId: v.deviceId ?? null,
+        deviceId: v.deviceId ?? device,
       })),
     });
   }

@@ -13,7 +13,7 @@ interface EntryKind<T extends { id: string }> {
   check: (raw: unknown, c: RowContext) => RowResult<T>;
   insert: (items: T[], meta: EntryMeta) => Promise<number>;
   /** Tells the record's other tablets (events and EtCO2 values; not the capnogram). */
-  publish?: (id: string, items: T[]) => void;
+  publish?: (id: string, items: T[], device: string | null) => void;
 }
 
 export interface SyncContext {
@@ -44,7 +44,7 @@ export class SyncService {
       table: 'resuscitationEvents',
       check: eventRow,
       insert: (events, meta) => this.entries.insertEvents(events, meta),
-      publish: (rid, events) => this.feed.publishEvents(rid, events),
+      publish: (rid, events, device) => this.feed.publishEvents(rid, events, device),
     });
   }
 
@@ -53,7 +53,7 @@ export class SyncService {
       table: 'etco2Samples',
       check: etco2Row,
       insert: (values, meta) => this.entries.insertEtco2(values, meta),
-      publish: (rid, values) => this.feed.publishEtco2(rid, values),
+      publish: (rid, values, device) => this.feed.publishEtco2(rid, values, device),
     });
   }
 
@@ -131,7 +131,7 @@ export class SyncService {
     accepted: number,
   ): Promise<void> {
     // Other tablets showing this record hear at once (duplicates are harmless to them).
-    kind.publish?.(id, own);
+    kind.publish?.(id, own, ctx.deviceId ?? null);
     await this.audit.insert({
       userId: user.id,
       action: 'append',
