@@ -49,6 +49,9 @@ const apiZones = foldersIn('api/src/modules').map((name) => ({
     join(root, 'api/src/modules/*/*.module.ts'),
     join(root, 'api/src/modules/*/*.service.ts'),
     join(root, 'api/src/modules/*/*.guard.ts'),
+    // The worker pool renders PDFs in worker threads, where no Nest container runs: it calls
+    // the exports module's pure renderer directly (no database, no state).
+    ...(name === 'work-pool' ? [join(root, 'api/src/modules/exports/pdf/**')] : []),
   ],
   message: 'Reach another module through its exported service, never its repository or helpers.',
 }));
