@@ -10,9 +10,10 @@ import zlib from 'node:zlib';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const dist = process.env.WEB_DIST ?? path.join(root, 'web', 'dist');
-// `targetKB` is the goal; `budgetKB` is what npm test enforces. Live is not yet at its goal
-// (react-dom and the router, MUI, zod with the contracts, Dexie and the form library are all
-// needed before it is usable): its budget holds today's size so it can only shrink.
+// `targetKB` is the goal; `budgetKB` is what npm test enforces. Live is not yet at its goal:
+// its dialogs, prompts, metronome and monitor panel now load after its first draw, but
+// react-dom and the router, MUI, zod with the contracts and Dexie are all needed before it is
+// usable. Its budget holds today's size (271 KB) so it can only shrink.
 const screens = {
   signIn: {
     targetKB: 250,
@@ -21,7 +22,7 @@ const screens = {
   },
   live: {
     targetKB: 250,
-    budgetKB: 345,
+    budgetKB: 275,
     sources: ['src/app/layout.tsx', 'src/background.ts', 'src/app/routes/live.tsx'],
   },
 };

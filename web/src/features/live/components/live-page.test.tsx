@@ -88,7 +88,7 @@ describe('Live follows the patient', () => {
     renderLive();
     const clock = await screen.findByRole('timer', { name: 'ROSC for' });
     expect(clock).toHaveTextContent(/^6:\d\d$/);
-    const prompts = screen.getByRole('status', { name: 'Prompts' });
+    const prompts = await screen.findByRole('status', { name: 'Prompts' });
     // One height with or without prompts: the buttons below never move under a finger.
     expect(prompts).toHaveStyle({ height: '104px' });
     expect(prompts).not.toHaveTextContent(/Rhythm check|Epinephrine|Hands off/);
@@ -103,7 +103,7 @@ describe('Live follows the patient', () => {
     await seed(arrestThenRosc());
     renderLive();
     await userEvent.click(await screen.findByRole('button', { name: 'Re-arrest' }));
-    const prompts = screen.getByRole('status', { name: 'Prompts' });
+    const prompts = await screen.findByRole('status', { name: 'Prompts' });
     // The last epinephrine was 10 min ago: past the site's 3-min interval (AHA 2020, summary).
     expect(await within(prompts).findByText(/Epinephrine interval reached/)).toBeInTheDocument();
     expect(screen.getByRole('timer', { name: 'Rhythm check in' })).toHaveTextContent(/^[12]:\d\d$/);
@@ -114,7 +114,7 @@ describe('Live follows the patient', () => {
     await seed(arrestThenRosc());
     renderLive();
     await userEvent.click(await screen.findByRole('button', { name: 'End' }));
-    const dialog = screen.getByRole('dialog');
+    const dialog = await screen.findByRole('dialog');
     expect(within(dialog).queryByRole('button', { name: 'Sustained ROSC' })).toBeNull();
     await userEvent.click(within(dialog).getByRole('button', { name: 'ROSC at end of record' }));
     expect(await screen.findByText('Code ended · ROSC at end of record')).toBeInTheDocument();
@@ -167,7 +167,7 @@ describe('Arrest time on Live', () => {
     const since = await screen.findByRole('timer', { name: 'Since arrest' });
     expect(since).toHaveTextContent(/^12:\d\d$/);
     await userEvent.click(screen.getByRole('button', { name: 'Arrest time' }));
-    const dialog = screen.getByRole('dialog');
+    const dialog = await screen.findByRole('dialog');
     await userEvent.click(within(dialog).getByRole('button', { name: '5 min' }));
     const save = within(dialog).getByRole('button', { name: 'Set arrest time' });
     expect(save).toBeDisabled(); // a reason is required

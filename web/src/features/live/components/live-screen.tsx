@@ -1,30 +1,40 @@
 import { Box, Stack } from '@mui/material';
-import type { Etco2DisplayUnit, Thresholds } from '@upstroke/contracts';
-import { type ComponentType, memo, useCallback, useDeferredValue, useMemo, useState } from 'react';
+import type { Etco2DisplayUnit } from '@upstroke/contracts';
+import {
+  type ComponentType,
+  Suspense,
+  useCallback,
+  useDeferredValue,
+  useEffect,
+  useMemo,
+  useState,
+} from 'react';
 import { ClinicalCaution } from '../../../components/ui/clinical-caution';
-import type { LocalEtco2, LocalEvent, LocalResuscitation } from '../../../lib/offline';
-import { RosterDialog } from '../../../components/roster-dialog';
+import type { LocalResuscitation } from '../../../lib/offline';
 import { useArrestTime } from '../hooks/use-arrest-time';
 import { useLiveActions } from '../hooks/use-live-actions';
 import { type useLiveRecord, useSiteSettings } from '../hooks/use-live-record';
 import { useSaveAgeGroup } from '../hooks/use-save-age-group';
 import { useSaveWeight } from '../hooks/use-save-weight';
-import { useNow } from '../hooks/use-now';
-import { usePrompts } from '../hooks/use-prompts';
 import { startArrest } from '../lib/arrest-time';
 import type { LiveState } from '../lib/live-state';
 import { undoneIds, undoTarget } from '../lib/undo-target';
 import { ActionGrid } from './action-grid';
-import { ArrestTimeDialog } from './arrest-time-dialog';
 import { CausesChecklist, tickedCauses } from './causes-checklist';
 import { CompressionsToggle } from './compressions-toggle';
-import { DetailsDialog } from './details-dialog';
 import { Etco2Trend } from './etco2-trend';
 import { EventLog } from './event-log';
-import { LiveDialogs, type DialogName } from './live-dialogs';
+import {
+  ArrestTimeDialog,
+  DetailsDialog,
+  LiveDialogs,
+  LivePrompts,
+  Metronome,
+  preloadDialogs,
+  RosterDialog,
+} from './lazy-dialogs';
+import type { DialogName } from './live-dialogs';
 import { LiveHeader } from './live-header';
-import { Metronome } from './metronome';
-import { PromptBanner } from './prompt-banner';
 import { TimersBar } from './timers-bar';
 import { UndoNotice } from './undo-notice';
 
@@ -83,6 +93,7 @@ export function LiveScreen({
   );
   const onWeight = useSaveWeight(record.id, actions.record);
   const onAgeGroup = useSaveAgeGroup(record.id, record.ageGroup, actions.record);
+  useEffect(() => void preloadDialogs(), []);
   return (
     <Stack spacing={1.5}>
       <LiveHeader
@@ -105,14 +116,16 @@ export function LiveScreen({
             pauseMaxSec={thresholds.pauseMaxSec}
             onToggle={actions.toggleCompressions}
           />
-          <LivePrompts
-            arrestAt={record.arrestAt}
-            state={state}
-            events={laterEvents}
-            etco2={laterKept}
-            thresholds={thresholds}
-            unit={etco2Unit}
-          />
+          <Suspense fallback={null}>
+            <LivePrompts
+              arrestAt={record.arrestAt}
+              state={state}
+              events={laterEvents}
+              etco2={laterKept}
+              thresholds={thresholds}
+              unit={etco2Unit}
+            />
+          </Suspense>
           <ActionGrid
             phase={state.phase}
             onOpen={setDialog}
@@ -136,7 +149,9 @@ export function LiveScreen({
             unit={etco2Unit}
             onEtco2={actions.etco2At}
           />
-          <Metronome paused={state.phase !== 'pulseless'} />
+          <Suspense fallback={null}>
+            <Metronome paused={state.phase !== 'pulseless'} />
+          </Suspense>
           <EventLog
             arrestAt={record.arrestAt}
             events={laterEvents}
@@ -147,51 +162,39 @@ export function LiveScreen({
           <CausesChecklist ticked={ticked} onNote={actions.note} />
         </Stack>
       </Box>
-      <LiveDialogs
-        open={dialog === 'details' || dialog === 'team' || dialog === 'arrest' ? null : dialog}
-        onClose={close}
-        record={actions.record}
-        onEtco2={actions.etco2}
-        onEnd={actions.end}
-        thresholds={thresholds}
-        etco2Unit={etco2Unit}
-        patient={patient}
-        onWeight={onWeight}
-        onAgeGroup={onAgeGroup}
-        shocksGiven={state.shocks}
-      />
-      {dialog === 'details' && <DetailsDialog open record={record} onClose={close} />}
-      {dialog === 'arrest' && (
-        <ArrestTimeDialog
-          open
-          startAt={startArrest(events)?.at ?? record.arrestAt}
-          onSave={(minutes, reason) => {
-            void setArrest(minutes, reason);
-            close();
-          }}
+      <Suspense fallback={null}>
+        <LiveDialogs
+          open={dialog === 'details' || dialog === 'team' || dialog === 'arrest' ? null : dialog}
+          onClose={close}
+          record={actions.record}
+          onEtco2={actions.etco2}
+          onEnd={actions.end}
+          thresholds={thresholds}
+          etco2Unit={etco2Unit}
+          patient={patient}
+          onWeight={onWeight}
+          onAgeGroup={onAgeGroup}
+          shocksGiven={state.shocks}
+        />
+        {dialog === 'details' && <DetailsDialog open record={record} onClose={close} />}
+        {dialog === 'arrest' && (
+          <ArrestTimeDialog
+            open
+            startAt={startArrest(events)?.at ?? record.arrestAt}
+            onSave={(minutes, reason) => {
+              void setArrest(minutes, reason);
+              close();
+            }}
+            onClose={close}
+          />
+        )}
+        <RosterDialog
+          open={dialog === 'team'}
+          recordId={record.id}
+          roster={record.roster}
           onClose={close}
         />
-      )}
-      <RosterDialog
-        open={dialog === 'team'}
-        recordId={record.id}
-        roster={record.roster}
-        onClose={close}
-      />
+      </Suspense>
     </Stack>
   );
 }
-
-/** The prompt banner, recomputed once a second from the recorded data. */
-const LivePrompts = memo(function LivePrompts(props: {
-  arrestAt: string;
-  state: LiveState;
-  events: LocalEvent[];
-  etco2: LocalEtco2[];
-  thresholds: Thresholds;
-  unit: Etco2DisplayUnit;
-}) {
-  const now = useNow(1000);
-  const prompts = usePrompts({ ...props, now });
-  return <PromptBanner prompts={prompts} />;
-});
