@@ -1,9 +1,14 @@
 /**
- * Live recording benchmark (issue 4), in Chromium against the running built app:
- *  - tap → IndexedDB commit: 500 taps on the Live screen, timed by the app's own User Timing
- *    entry `upstroke:tap-commit`: from the tap handler's start to the moment the transaction
- *    completed in the tap-writer worker (its completion time, read on the worker's clock and
- *    placed on the page's by `performance.timeOrigin`); target p95 ≤ 16 ms;
+ * Live recording benchmark, in Chromium against the running built app, three runs unthrottled
+ * and three with the CPU slowed 4× (DevTools protocol `Emulation.setCPUThrottlingRate`, a
+ * mid-range tablet):
+ *  - Start tap → Live usable: from the tap on Start to the ROSC button on the Live screen
+ *    being enabled; target ≤ 1 s throttled;
+ *  - tap → IndexedDB commit: 200 taps on the Live screen per run, timed by the app's own User
+ *    Timing entry `upstroke:tap-commit`: from the tap handler's start to the moment the
+ *    transaction completed in the tap-writer worker (its completion time, read on the
+ *    worker's clock and placed on the page's by `performance.timeOrigin`); target p95
+ *    ≤ 10 ms unthrottled, ≤ 32 ms throttled;
  *  - sync: 1,000 events queued offline, then back online; time until the database holds them
  *    all (loopback); target ≤ 2 s.
  * Needs BENCH_BASE_URL and BENCH_DATABASE_URL (set by `npm run bench`); skips without them.
@@ -13,7 +18,7 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { loadavg } from 'node:os';
 import { resolve } from 'node:path';
 import pg from 'pg';
-import type { Page } from 'playwright-core';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
 // The browser tests' launcher and queue helper: the bench drives the app the same way.
 import { launchBrowser } from '../e2e/support/browser';
 import { queueEvents } from '../e2e/support/live';
@@ -21,7 +26,8 @@ import { queueEvents } from '../e2e/support/live';
 const RESULTS = resolve(__dirname, 'results.json');
 const baseUrl = process.env.BENCH_BASE_URL;
 const databaseUrl = process.env.BENCH_DATABASE_URL;
-const TAPS = 500;
+const TAPS = 200;
+const RUNS = 3;
 const QUEUED = 1000;
 
 const percentile = (sorted: number[], p: number) =>
@@ -51,15 +57,46 @@ const rawWrites = `async (n) => {
   return out;
 }`;
 
-async function startCode(page: Page): Promise<string> {
+/** Signs in, taps Start; returns the record id and the time until Live is usable. */
+async function startCode(page: Page): Promise<{ id: string; startToUsableMs: number }> {
   await page.goto(`${baseUrl}/sign-in`);
   await page.getByLabel('Email').fill('recorder@kestrel.test');
   await page.getByLabel('Password').fill('upstroke-demo');
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('button', { name: 'Start', exact: true }).click();
+  const start = page.getByRole('button', { name: 'Start', exact: true });
+  await start.waitFor();
+  const t0 = performance.now();
+  await start.click();
+  await page.getByRole('button', { name: 'ROSC', exact: true }).waitFor();
+  const startToUsableMs = performance.now() - t0;
   await page.waitForURL(/\/live\/[0-9a-f-]{36}$/);
-  await page.getByRole('status', { name: 'Sync: All saved' }).waitFor();
-  return page.url().split('/').pop() as string;
+  await page.getByRole('status', { name: 'Sync: All saved' }).waitFor({ timeout: 30_000 });
+  return { id: page.url().split('/').pop() as string, startToUsableMs };
+}
+
+/** One run: a fresh page at the given CPU slow-down, Start, then the taps. */
+async function run(browser: Browser, rate: number) {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+  const page = await context.newPage();
+  const cdp = await context.newCDPSession(page);
+  await cdp.send('Emulation.setCPUThrottlingRate', { rate });
+  const { id, startToUsableMs } = await startCode(page);
+  for (let i = 0; i < TAPS; i++)
+    await page.getByRole('button', { name: i % 2 ? 'Re-arrest' : 'ROSC', exact: true }).click();
+  const durations = (await page.evaluate(
+    "performance.getEntriesByName('upstroke:tap-commit').map((e) => e.duration)",
+  )) as number[];
+  const sorted = [...durations].sort((a, b) => a - b);
+  const figures = {
+    cpuSlowdown: rate,
+    startToUsableMs: Math.round(startToUsableMs),
+    taps: durations.length,
+    p50Ms: Number(percentile(sorted, 50).toFixed(2)),
+    p95Ms: Number(percentile(sorted, 95).toFixed(2)),
+    maxMs: Number(sorted.at(-1)?.toFixed(2)),
+    loadAverage1m: Number(loadavg()[0].toFixed(2)),
+  };
+  return { context, page, id, figures };
 }
 
 async function main(): Promise<void> {
@@ -70,19 +107,21 @@ async function main(): Promise<void> {
     return;
   }
   const { browser } = await launchBrowser();
+  let last: { context: BrowserContext; page: Page; id: string } | undefined;
   const db = new pg.Client({ connectionString: databaseUrl });
   await db.connect();
   try {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
-    const page = await context.newPage();
-    const id = await startCode(page);
-
-    for (let i = 0; i < TAPS; i++)
-      await page.getByRole('button', { name: i % 2 ? 'Re-arrest' : 'ROSC', exact: true }).click();
-    const durations = (await page.evaluate(
-      "performance.getEntriesByName('upstroke:tap-commit').map((e) => e.duration)",
-    )) as number[];
-    const sorted = [...durations].sort((a, b) => a - b);
+    const runs = [];
+    for (const rate of [1, 4])
+      for (let r = 0; r < RUNS; r++) {
+        const one = await run(browser, rate);
+        runs.push(one.figures);
+        if (rate > 1 || r < RUNS - 1) await one.context.close();
+        else last = one; // the sync measure goes on in the last unthrottled run's page
+      }
+    if (!last) throw new Error('no run');
+    const { context, page, id } = last;
+    await (await context.newCDPSession(page)).send('Emulation.setCPUThrottlingRate', { rate: 1 });
     const floor = ((await page.evaluate(`(${rawWrites})(${TAPS})`)) as number[]).sort(
       (a, b) => a - b,
     );
@@ -104,15 +143,14 @@ async function main(): Promise<void> {
     const live = {
       measuredAt: new Date().toISOString(),
       chromium: browser.version(),
-      tapToCommit: {
-        taps: durations.length,
-        p50Ms: Number(percentile(sorted, 50).toFixed(2)),
-        p95Ms: Number(percentile(sorted, 95).toFixed(2)),
-        maxMs: Number(sorted.at(-1)?.toFixed(2)),
-        targetP95Ms: 16,
-        bareIndexedDbWriteP95Ms: Number(percentile(floor, 95).toFixed(2)),
-        loadAverage1m: Number(loadavg()[0].toFixed(2)),
-      },
+      runs,
+      targets: { startToUsableMs: 1000, tapP95Ms: 10, tapP95ThrottledMs: 32 },
+      pass: runs.every(
+        (r) =>
+          r.p95Ms <= (r.cpuSlowdown > 1 ? 32 : 10) &&
+          (r.cpuSlowdown === 1 || r.startToUsableMs <= 1000),
+      ),
+      bareIndexedDbWriteP95Ms: Number(percentile(floor, 95).toFixed(2)),
       sync1000: {
         events: QUEUED,
         stored,
