@@ -23,52 +23,61 @@ const columnsFor = (f: Formatter): GridColDef<TrendsRecord>[] => [
   {
     field: 'arrestAt',
     headerName: 'Arrest',
-    width: 170,
+    width: 140,
     renderCell: ({ row }) => (
       <Link component={RouterLink} to={`/debrief/${row.resuscitationId}`}>
         {f.dateTime(row.arrestAt)}
       </Link>
     ),
   },
-  { field: 'unitName', headerName: 'Unit', width: 130, sortable: false },
+  { field: 'unitName', headerName: 'Unit', width: 110, sortable: false },
   {
     field: 'firstRhythm',
     headerName: 'First rhythm',
-    width: 120,
+    width: 110,
     sortable: false,
     valueFormatter: (v: string | null) => labelOf(rhythmLabels, v),
   },
   {
     field: 'outcome',
     headerName: 'Outcome',
-    width: 150,
+    width: 130,
     sortable: false,
     valueFormatter: (v: string | null) => labelOf(outcomeLabels, v),
   },
   {
     field: 'compressionFraction',
-    headerName: 'Compression fraction',
-    width: 170,
+    headerName: 'Compr. fraction',
+    description: 'Compression fraction',
+    width: 110,
     valueFormatter: pct,
   },
   {
     field: 'fractionGe10',
-    headerName: `CPR time EtCO2 ≥ ${formatEtco2Both(10)}`,
+    headerName: `EtCO2 ≥ ${formatEtco2Both(10)}`,
+    description: `Share of CPR time with EtCO2 at or above ${formatEtco2Both(10)}`,
     width: 160,
     valueFormatter: pct,
   },
-  { field: 'timeToFirstShockSec', headerName: 'First shock', width: 110, valueFormatter: sec },
+  { field: 'timeToFirstShockSec', headerName: 'First shock', width: 95, valueFormatter: sec },
   {
     field: 'timeToFirstEpinephrineSec',
-    headerName: 'First epinephrine',
-    width: 140,
+    headerName: 'First epi.',
+    description: 'Time to first epinephrine',
+    width: 95,
     valueFormatter: sec,
   },
-  { field: 'preshockLongCount', headerName: 'Long pre-shock pauses', width: 170 },
+  {
+    field: 'preshockLongCount',
+    headerName: 'Long pre-shock',
+    description: 'Long pre-shock pauses',
+    width: 105,
+  },
   {
     field: 'reviewStatus',
     headerName: 'Review',
-    width: 140,
+    flex: 1,
+    minWidth: 120,
     sortable: false,
     valueFormatter: (v: string | null) => labelOf(reviewStatusLabels, v ?? 'awaiting'),
   },
@@ -115,6 +124,19 @@ export function RecordsGrid({ filter }: { filter: TrendsFilter }) {
       onSortModelChange={onSort}
       autoHeight
       disableRowSelectionOnClick
+      // The toolbar's column chooser; its own CSV and print are left out (the page's CSV is
+      // the audited, rounded one).
+      showToolbar
+      slotProps={{
+        toolbar: {
+          csvOptions: { disableToolbarButton: true },
+          printOptions: { disableToolbarButton: true },
+        },
+      }}
+      localeText={{
+        toolbarColumns: 'Columns',
+        noRowsLabel: 'No signed records match these filters',
+      }}
     />
   );
 }

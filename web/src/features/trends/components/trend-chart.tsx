@@ -36,7 +36,11 @@ export interface ChartSpec {
   spc?: SpcMeasure[];
 }
 
-/** One monthly series; the x axis names each month with its n, the dashed line is the target. */
+/**
+ * One monthly series; the x axis names each month with its n, a month without records is a
+ * gap (never a line drawn across it), and the dashed line is the profile's target, named in
+ * the caption rather than on the plot so no label covers a point.
+ */
 export function TrendChart({
   title,
   scale,
@@ -50,7 +54,7 @@ export function TrendChart({
   const control = view === 'control' && Boolean(spc?.length);
   const labels = points.map((p) => `${p.month} (n=${p.n})`);
   const values = points.map((p) =>
-    p.value === null ? null : Math.round(p.value * scale * 10) / 10,
+    p.value === null || p.n === 0 ? null : Math.round(p.value * scale * 10) / 10,
   );
   const summary = points
     .flatMap((p, i) => (values[i] === null ? [] : [`${p.month}: ${values[i]} ${unit} (n=${p.n})`]))
@@ -64,10 +68,16 @@ export function TrendChart({
           </Typography>
           {spc?.length ? <ChartViewToggle title={title} value={view} onChange={setView} /> : null}
         </Stack>
+        <Typography variant="body2" color="text.secondary" gutterBottom>
+          {target === null
+            ? 'No target in the protocol profile'
+            : `Dashed line: target ${Math.round(target * scale * 10) / 10} ${unit} (protocol profile)`}
+          {points.some((p) => p.n === 0) ? ' · gaps: months without records' : ''}
+        </Typography>
         {control && spc ? <ControlChartView measures={spc} filter={filter} /> : null}
         <Box
           role="img"
-          aria-label={`${title}. ${summary || 'No records in this period.'}`}
+          aria-label={`${title}. ${target === null ? '' : `Target ${Math.round(target * scale * 10) / 10} ${unit}. `}${summary || 'No records in this period.'}`}
           sx={{ height: 220, display: control ? 'none' : undefined }}
         >
           <Line
@@ -77,7 +87,7 @@ export function TrendChart({
                 {
                   label: `${title} (${unit})`,
                   data: values,
-                  spanGaps: true,
+                  spanGaps: false,
                   borderColor: '#1565c0',
                   backgroundColor: '#1565c0',
                 },
@@ -99,11 +109,6 @@ export function TrendChart({
                             yMax: target * scale,
                             borderColor: '#2e7d32',
                             borderDash: [6, 4],
-                            label: {
-                              display: true,
-                              content: `Target ${target * scale} ${unit}`,
-                              position: 'end',
-                            },
                           },
                         },
                 },

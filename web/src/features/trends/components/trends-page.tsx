@@ -1,9 +1,11 @@
 import { Box, Button, GlobalStyles, Stack, Typography } from '@mui/material';
-import { formatEtco2Both, type TrendsFilter, type TrendsResponse } from '@upstroke/contracts';
+import { formatEtco2Both, type TrendsResponse } from '@upstroke/contracts';
 import { useState } from 'react';
 import { ErrorState, Loading, PageHeader } from '../../../components/ui/states';
 import { downloadCsv } from '../api/download-csv';
 import { useTrends } from '../api/get-trends';
+import { useTrendsFilter } from '../hooks/use-trends-filter';
+import { FiltersSummary } from './filters-summary';
 import { RecordsGrid } from './records-grid';
 import { FunnelSection } from './spc/funnel-section';
 import { type ChartSpec, TrendChart } from './trend-chart';
@@ -67,7 +69,7 @@ function chartSpecs(t: TrendsResponse): ChartSpec[] {
 
 /** Trends for the quality committee: filters, monthly charts, records, Utstein summary. */
 export function TrendsPage() {
-  const [filter, setFilter] = useState<TrendsFilter>({});
+  const [filter, setFilter] = useTrendsFilter();
   const trends = useTrends(filter);
   const [exportError, setExportError] = useState<unknown>(null);
   const download = (kind: 'export' | 'utstein') => {
@@ -99,6 +101,7 @@ export function TrendsPage() {
       <Box className="no-print">
         <TrendsFilters value={filter} onChange={setFilter} />
       </Box>
+      <FiltersSummary filter={filter} />
       <TrendsHelp />
       {trends.isPending ? (
         <Loading label="Loading trends…" />

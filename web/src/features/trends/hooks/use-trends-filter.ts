@@ -1,0 +1,27 @@
+import { type TrendsFilter, trendsFilterSchema } from '@upstroke/contracts';
+import { useSearchParams } from 'react-router-dom';
+
+const keys = Object.keys(trendsFilterSchema.shape) as (keyof TrendsFilter)[];
+
+/** The filter the URL holds; a key that does not parse (a hand-edited link) is dropped alone. */
+export function trendsFilterFrom(params: URLSearchParams): TrendsFilter {
+  const filter: Record<string, string> = {};
+  for (const key of keys) {
+    const value = params.get(key);
+    if (!value) continue;
+    const one = trendsFilterSchema.shape[key].safeParse(value);
+    if (one.success && one.data !== undefined) filter[key] = value;
+  }
+  return filter as TrendsFilter;
+}
+
+/** Trends filters kept in the URL, so a reload, a bookmark or a shared link keeps them. */
+export function useTrendsFilter(): [TrendsFilter, (next: TrendsFilter) => void] {
+  const [params, setParams] = useSearchParams();
+  const set = (next: TrendsFilter) => {
+    const out = new URLSearchParams();
+    for (const key of keys) if (next[key]) out.set(key, String(next[key]));
+    setParams(out, { replace: true });
+  };
+  return [trendsFilterFrom(params), set];
+}
