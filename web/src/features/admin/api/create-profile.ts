@@ -1,4 +1,8 @@
-import { type CreateProfileVersion, protocolProfileSchema } from '@upstroke/contracts';
+import {
+  type CreateProfileVersion,
+  type ProtocolProfile,
+  protocolProfileSchema,
+} from '@upstroke/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 
@@ -6,10 +10,17 @@ export function createProfile(body: CreateProfileVersion) {
   return apiFetch('/protocol-profiles', { method: 'POST', body, schema: protocolProfileSchema });
 }
 
-export function useCreateProfile() {
+/**
+ * `onSaved` runs with the mutation, not the form: the refetch that follows remounts the form
+ * on the new version, and a callback given to `mutate` would be dropped with it.
+ */
+export function useCreateProfile(onSaved?: (p: ProtocolProfile) => void) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: createProfile,
-    onSuccess: () => client.invalidateQueries({ queryKey: ['admin'] }),
+    onSuccess: (saved) => {
+      onSaved?.(saved);
+      return client.invalidateQueries({ queryKey: ['admin'] });
+    },
   });
 }

@@ -30,15 +30,13 @@ export function ProfileForm({
   basis: ProtocolProfile | null;
   onSaved: (p: ProtocolProfile) => void;
 }) {
-  const create = useCreateProfile();
+  const create = useCreateProfile(onSaved);
   const form = useForm<ProfileFormValues>({
     resolver: profileResolver,
     values: initialValues(siteId, basis),
   });
   const { register, handleSubmit, reset, formState } = form;
-  const submit = handleSubmit((values) =>
-    create.mutate(profileBody(values), { onSuccess: onSaved }),
-  );
+  const submit = handleSubmit((values) => create.mutate(profileBody(values)));
   return (
     <Box component="form" noValidate onSubmit={(e) => void submit(e)} aria-label="Protocol profile">
       <Stack spacing={2}>
