@@ -20,6 +20,19 @@ const preferredPorts = {
 };
 const cleanups = [];
 const results = [];
+// For a developer's quicker loop: `npm test -- --only=build,e2e --e2e=trends` runs only the
+// named steps (lint, format, build, unit, api, e2e) and only the e2e files whose name holds
+// one of the given texts (comma-separated). With no options, everything runs (as CI does).
+const options = Object.fromEntries(
+  process.argv
+    .slice(2)
+    .map((arg) => /^--(only|e2e)=(.*)$/.exec(arg))
+    .filter(Boolean)
+    .map((m) => [m[1], m[2]]),
+);
+const onlySteps = options.only ? new Set(options.only.split(',')) : null;
+const wants = (name) =>
+  !onlySteps || onlySteps.has(name) || (name === 'build' && onlySteps.has('e2e'));
 
 function cleanup() {
   while (cleanups.length) {
@@ -81,38 +94,44 @@ async function main() {
   };
   const out = (name) => path.join(work, name);
 
-  await step('lint (ESLint, zero warnings)', 'npx', ['eslint', '.', '--max-warnings', '0']);
-  await step('format (Prettier)', 'npx', ['prettier', '--check', '--log-level', 'warn', '.']);
-  const built = await step('type-check and build (tsc -b, vite build)', 'node', [
-    'scripts/lib/build-cli.mjs',
-  ]);
+  if (wants('lint'))
+    await step('lint (ESLint, zero warnings)', 'npx', ['eslint', '.', '--max-warnings', '0']);
+  if (wants('format'))
+    await step('format (Prettier)', 'npx', ['prettier', '--check', '--log-level', 'warn', '.']);
+  const built =
+    wants('build') &&
+    (await step('type-check and build (tsc -b, vite build)', 'node', [
+      'scripts/lib/build-cli.mjs',
+    ]));
   if (built)
     await step('JavaScript budget per first screen (web/dist, gzip)', 'node', [
       'scripts/bundle-budget.mjs',
     ]);
-  await step(
-    'unit tests (vitest: packages, web)',
-    'npx',
-    [
-      'vitest',
-      'run',
-      '--reporter=default',
-      '--reporter=json',
-      `--outputFile.json=${out('vitest.json')}`,
-    ],
-    { env, countsFile: out('vitest.json') },
-  );
-  await step(
-    'API tests (jest + supertest, real PostgreSQL)',
-    'npx',
-    ['jest', '--runInBand', '--json', `--outputFile=${out('jest.json')}`],
-    {
-      cwd: path.join(root, 'api'),
-      env: { ...env, TEST_DATABASE_URL: apiDbUrl },
-      countsFile: out('jest.json'),
-    },
-  );
-  if (built) {
+  if (wants('unit'))
+    await step(
+      'unit tests (vitest: packages, web)',
+      'npx',
+      [
+        'vitest',
+        'run',
+        '--reporter=default',
+        '--reporter=json',
+        `--outputFile.json=${out('vitest.json')}`,
+      ],
+      { env, countsFile: out('vitest.json') },
+    );
+  if (wants('api'))
+    await step(
+      'API tests (jest + supertest, real PostgreSQL)',
+      'npx',
+      ['jest', '--runInBand', '--json', `--outputFile=${out('jest.json')}`],
+      {
+        cwd: path.join(root, 'api'),
+        env: { ...env, TEST_DATABASE_URL: apiDbUrl },
+        countsFile: out('jest.json'),
+      },
+    );
+  if (built && wants('e2e')) {
     const preferred = { app: preferredPorts.app, smtp: preferredPorts.smtp };
     const server = await startTestApp(root, work, preferred, ({ app, smtp }) => ({
       ...process.env,
@@ -168,7 +187,7 @@ async function main() {
       );
       if (!passed) server.keep('the app under the browser tests');
     }
-  } else {
+  } else if (wants('e2e')) {
     results.push({
       name: 'end-to-end tests (not run: the build failed)',
       ok: false,
@@ -182,7 +201,11 @@ function e2eFiles() {
   const dir = path.join(root, 'e2e', 'tests');
   return fs
     .readdirSync(dir)
-    .filter((f) => f.endsWith('.spec.ts'))
+    .filter(
+      (f) =>
+        f.endsWith('.spec.ts') &&
+        (!options.e2e || options.e2e.split(',').some((part) => f.includes(part))),
+    )
     .sort()
     .map((f) => path.join('e2e', 'tests', f));
 }

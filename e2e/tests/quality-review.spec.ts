@@ -9,6 +9,7 @@ import {
 import type { Browser } from 'playwright-core';
 import { launchBrowser, newTabletContext, signIn } from '../support/browser';
 import { baseUrl, demoPassword, emailOf } from '../support/env';
+import { until } from '../support/live';
 
 /** The first day of the calendar quarter holding `iso`, and of the next one (UTC dates). */
 function quarterOf(iso: string): { from: string; to: string } {
@@ -63,9 +64,20 @@ describe('quality committee reviews a record found through Trends', () => {
     const grid = page.getByRole('grid', { name: 'Records' });
     const link = grid.getByRole('link', { name: when });
     await link.waitFor();
-    // Every row on screen belongs to the chosen unit.
-    const units = await grid.locator('[data-field="unitName"][role="gridcell"]').allInnerTexts();
-    assert.ok(units.length > 0 && units.every((u) => u.trim() === target.unitName));
+    // Every row on screen belongs to the chosen unit, once the filtered page has replaced the
+    // unfiltered one (the grid keeps the previous rows on screen while the next page loads).
+    const unitCells = grid.locator('[data-field="unitName"][role="gridcell"]');
+    const units = await until(
+      () => unitCells.allInnerTexts(),
+      (texts) => texts.length > 0 && texts.every((u) => u.trim() === target.unitName),
+      15_000,
+    );
+    assert.ok(units.length > 0, 'the filtered grid lists the record');
+    assert.deepEqual(
+      units.filter((u) => u.trim() !== target.unitName),
+      [],
+      'every listed record belongs to the chosen unit',
+    );
     await link.click();
     await page.waitForURL(`**/debrief/${target.resuscitationId}`);
 

@@ -2,14 +2,15 @@ import {
   type Debrief,
   etco2Number,
   etco2ToMmHg,
+  eventMarkerLegend,
   formatEtco2,
   type TimelineMarker,
 } from '@upstroke/contracts';
 import { drawChartLegend } from './chart-legend';
 import { colors, type Layout } from './layout';
 
-const codes =
-  'Codes: CA arrest · S shock · D drug (E = epinephrine) · A airway · V ventilation · R rhythm · P pulse · ROSC · RA re-arrest · IV access · ticks: notes';
+/** The same legend as the screen's, from the contracts' one table of marker codes. */
+const codes = `Codes: ${eventMarkerLegend.map((m) => `${m.code} ${m.meaning}`).join(' · ')}`;
 
 /**
  * The record on one vector chart: EtCO2, capnogram, compressions, flagged intervals, data

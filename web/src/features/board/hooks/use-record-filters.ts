@@ -1,4 +1,4 @@
-import { useSearchParams } from 'react-router-dom';
+import { useUrlSearch } from '../../../hooks/use-url-search';
 import { nextDay, zonedDayStart } from '../../../lib/zoned-day';
 
 /** The Board's filters as the URL keeps them (so a reload or a shared link keeps them too). */
@@ -51,21 +51,21 @@ export function isFiltered(f: RecordFilters): boolean {
 
 /** Filters and page in the URL; changing a filter goes back to the first page. */
 export function useRecordFilters() {
-  const [params, setParams] = useSearchParams();
-  const filters = filtersFrom(params);
-  const page = Math.max(0, Number(params.get('page') ?? 0) || 0);
-  const write = (f: RecordFilters, nextPage: number) => {
-    const out = new URLSearchParams();
-    for (const k of keys) if (f[k]) out.set(k, f[k]);
-    if (f.mine) out.set('mine', 'true');
-    if (nextPage > 0) out.set('page', String(nextPage));
-    setParams(out, { replace: true });
-  };
+  const [params, update] = useUrlSearch();
+  const write = (change: (f: RecordFilters) => RecordFilters, nextPage: number) =>
+    update((current) => {
+      const f = change(filtersFrom(current));
+      const out = new URLSearchParams();
+      for (const k of keys) if (f[k]) out.set(k, f[k]);
+      if (f.mine) out.set('mine', 'true');
+      if (nextPage > 0) out.set('page', String(nextPage));
+      return out;
+    });
   return {
-    filters,
-    page,
-    setFilters: (patch: Partial<RecordFilters>) => write({ ...filters, ...patch }, 0),
-    setPage: (p: number) => write(filters, p),
-    clear: () => write(filtersFrom(new URLSearchParams()), 0),
+    filters: filtersFrom(params),
+    page: Math.max(0, Number(params.get('page') ?? 0) || 0),
+    setFilters: (patch: Partial<RecordFilters>) => write((f) => ({ ...f, ...patch }), 0),
+    setPage: (p: number) => write((f) => f, p),
+    clear: () => write(() => filtersFrom(new URLSearchParams()), 0),
   };
 }

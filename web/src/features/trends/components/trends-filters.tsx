@@ -6,7 +6,8 @@ const outcomes = Object.entries(outcomeLabels);
 
 interface Props {
   value: TrendsFilter;
-  onChange: (next: TrendsFilter) => void;
+  /** Receives only what changed; the owner merges it over the latest filter. */
+  onChange: (patch: Partial<TrendsFilter>) => void;
 }
 
 /** Site, unit, period (from inclusive, to exclusive), first rhythm and outcome. */
@@ -17,7 +18,7 @@ export function TrendsFilters({ value, onChange }: Props) {
     .flatMap((s) =>
       s.units.map((u) => ({ ...u, label: sites.length > 1 ? `${u.name} (${s.name})` : u.name })),
     );
-  const set = (patch: Partial<TrendsFilter>) => onChange({ ...value, ...patch });
+  const set = onChange;
   const field = { size: 'small' as const, sx: { minWidth: 170 } };
   return (
     <Stack

@@ -1,5 +1,5 @@
 import { type TrendsFilter, trendsFilterSchema } from '@upstroke/contracts';
-import { useSearchParams } from 'react-router-dom';
+import { useUrlSearch } from '../../../hooks/use-url-search';
 
 const keys = Object.keys(trendsFilterSchema.shape) as (keyof TrendsFilter)[];
 
@@ -16,12 +16,15 @@ export function trendsFilterFrom(params: URLSearchParams): TrendsFilter {
 }
 
 /** Trends filters kept in the URL, so a reload, a bookmark or a shared link keeps them. */
-export function useTrendsFilter(): [TrendsFilter, (next: TrendsFilter) => void] {
-  const [params, setParams] = useSearchParams();
-  const set = (next: TrendsFilter) => {
-    const out = new URLSearchParams();
-    for (const key of keys) if (next[key]) out.set(key, String(next[key]));
-    setParams(out, { replace: true });
-  };
+/** Changes are patches over the latest filter, so quick successive changes all hold. */
+export function useTrendsFilter(): [TrendsFilter, (patch: Partial<TrendsFilter>) => void] {
+  const [params, update] = useUrlSearch();
+  const set = (patch: Partial<TrendsFilter>) =>
+    update((current) => {
+      const next: TrendsFilter = { ...trendsFilterFrom(current), ...patch };
+      const out = new URLSearchParams();
+      for (const key of keys) if (next[key]) out.set(key, String(next[key]));
+      return out;
+    });
   return [trendsFilterFrom(params), set];
 }
