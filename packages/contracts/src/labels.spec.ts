@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import type { z } from 'zod';
+import { z } from 'zod';
+
+const zodEnum = z.ZodEnum;
 import {
   etco2SourceSchema,
   findingKindSchema,
@@ -7,18 +9,30 @@ import {
   severitySchema,
 } from './analysis.js';
 import { ageGroupSchema, roleSchema } from './common.js';
-import { eventDetails, eventLabel } from './event-labels.js';
+import { mailStatusSchema } from './debrief.js';
 import {
+  eventDetails,
+  eventKindLabels,
+  eventLabel,
+  eventMarkerCodes,
+  rosterRoleLabels,
+} from './event-labels.js';
+import {
+  accessRouteSchema,
   airwayConfirmationSchema,
   airwayDeviceSchema,
   drugNameSchema,
   endReasonSchema,
+  eventKindSchema,
   rhythmSchema,
 } from './events.js';
+import * as contracts from './index.js';
 import * as L from './labels.js';
 import { simulatorScenarioSchema } from './monitor.js';
 import { reviewStatusSchema } from './quality.js';
 import { outcomeSchema, resuscitationStatusSchema } from './resuscitations.js';
+import { rosterRoleSchema } from './site-context.js';
+import { spcMeasureSchema } from './spc.js';
 
 const tables: [string, z.ZodEnum, Readonly<Record<string, string>>][] = [
   ['status', resuscitationStatusSchema, L.resuscitationStatusLabels],
@@ -36,16 +50,58 @@ const tables: [string, z.ZodEnum, Readonly<Record<string, string>>][] = [
   ['role', roleSchema, L.roleLabels],
   ['age group', ageGroupSchema, L.ageGroupLabels],
   ['source', etco2SourceSchema, L.etco2SourceLabels],
+  ['route', accessRouteSchema, L.routeLabels],
+  ['mail status', mailStatusSchema, L.mailStatusLabels],
+  ['event kind', eventKindSchema, eventKindLabels],
+  ['team role', rosterRoleSchema, rosterRoleLabels],
+  ['control-chart measure', spcMeasureSchema, L.spcMeasureLabels],
 ];
+
+/**
+ * Exported enums whose values are never shown as such, with the reason. Any other exported
+ * enum must have a table above: a new enum, or a new value, without words fails here.
+ */
+const notShown: Record<string, string> = {
+  paperSizeSchema: 'A4 and Letter are already the words people use',
+  co2UnitSchema: 'units (mmHg, kPa, %) are the trade’s own symbols',
+  etco2DisplayUnitSchema: 'units (mmHg, kPa) are the trade’s own symbols',
+  clockSchema: 'the site form words each choice (24-hour, 12-hour) beside an example',
+  patientStateSchema: 'steers Live’s buttons and prompts; never printed',
+  offsetMethodSchema: 'the import dialog words the offset in sentences',
+  trendMeasureSchema: 'a query parameter; each chart has its own title',
+  spcProportionSchema: 'a subset of the control-chart measures (worded there)',
+  spcContinuousSchema: 'a subset of the control-chart measures (worded there)',
+  spcRuleSchema: 'the API sends each rule in words with its source',
+  timelineShadeKindSchema: 'drawn as shaded bands with a legend in words',
+};
 
 describe('label table', () => {
   it.each(tables)('words every %s value, and none is the raw code', (_, schema, table) => {
     for (const value of schema.options as string[]) {
+      expect(Object.keys(table), `no words for "${value}"`).toContain(value);
       const word = L.labelOf(table, value);
       expect(word.length).toBeGreaterThan(1);
       // "rosc" → "ROSC" is fine; a lower-case hyphenated code is not a word for people.
       if (value.includes('-')) expect(word).not.toBe(value);
     }
+  });
+
+  it('has a table for every exported enum, or a reason it is never shown', () => {
+    const worded = new Set(tables.map(([, schema]) => schema));
+    const enums = Object.entries(contracts).filter(
+      ([name, v]) => name.endsWith('Schema') && v instanceof zodEnum,
+    );
+    expect(enums.length).toBeGreaterThan(20);
+    const missing = enums
+      .filter(([name, v]) => !worded.has(v as z.ZodEnum) && !(name in notShown))
+      .map(([name]) => name);
+    expect(missing).toEqual([]);
+  });
+
+  it('has a timeline marker for every event kind but the compression periods', () => {
+    const drawnAsPeriods = ['compressions-start', 'compressions-stop', 'correction'];
+    for (const kind of eventKindSchema.options)
+      if (!drawnAsPeriods.includes(kind)) expect(eventMarkerCodes[kind], kind).toBeTruthy();
   });
 
   it('names severities for review, not alarms', () => {

@@ -9,6 +9,7 @@ import type { Role } from './common.js';
 import type { DrugName, Rhythm } from './events.js';
 import type { SimulatorScenario } from './monitor.js';
 import type { ReviewStatus } from './quality.js';
+import type { SpcMeasure } from './spc.js';
 
 type Words<K extends string> = Readonly<Record<K, string>>;
 
@@ -145,6 +146,16 @@ export const etco2SourceLabels: Words<Etco2Source> = {
   stream: 'Monitor link',
   import: 'Monitor file',
   waveform: 'Capnogram',
+};
+
+/** Each control-chart measure as the committee reads it (Trends, its printout). */
+export const spcMeasureLabels: Words<SpcMeasure> = {
+  anyRosc: 'Any ROSC (share of records)',
+  compressionFractionMet: 'Compression fraction at or above target (share of records)',
+  etco2Documented: 'EtCO2 documented (share of records)',
+  compressionFraction: 'Median compression fraction',
+  timeToFirstShockSec: 'Median time to first shock, shockable (s)',
+  timeToFirstEpinephrineSec: 'Median time to first epinephrine, non-shockable (s)',
 };
 
 export const mailStatusLabels: Words<'queued' | 'sent' | 'failed'> = {

@@ -88,6 +88,8 @@ describe('findings', () => {
     expect(kinds(input, 'pause-long').map((f) => [f.startSec, f.severity])).toEqual([
       [200, 'critical'],
     ]);
+    // The pause's reason is written in words, never as its code ("pre-shock").
+    expect(kinds(input, 'pause-long')[0]?.message).toMatch(/paused for 25 s \(around a shock\)/);
     expect(kinds(input, 'preshock-pause-long').map((f) => [f.endSec, f.severity])).toEqual([
       [221, 'critical'],
     ]);

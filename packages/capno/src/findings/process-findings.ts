@@ -1,4 +1,4 @@
-import type { Finding, Interval } from '@upstroke/contracts';
+import { type Finding, type Interval, labelOf, pauseContextLabels } from '@upstroke/contracts';
 import { epinephrineTimes } from '../events/normalize.js';
 import { classifyPause } from '../events/measures.js';
 import {
@@ -29,7 +29,7 @@ export function pauseFindings(c: FindingContext): Finding[] {
     if (p.endSec < c.from) continue;
     if (p.durationSec > c.t.pauseMaxSec) {
       const sev = p.durationSec >= 2 * c.t.pauseMaxSec ? 'critical' : 'warning';
-      const msg = `Compressions paused for ${fmt(p.durationSec)} s (${p.context}), longer than the ${fmt(c.t.pauseMaxSec)} s target. Long pauses suggest room to shorten interruptions; consider planning tasks before stopping.`;
+      const msg = `Compressions paused for ${fmt(p.durationSec)} s (${labelOf(pauseContextLabels, p.context).toLowerCase()}), longer than the ${fmt(c.t.pauseMaxSec)} s target. Long pauses suggest room to shorten interruptions; consider planning tasks before stopping.`;
       out.push(finding('pause-long', p.startSec, p.endSec, sev, msg));
     }
     const pre = p.preShockSec;

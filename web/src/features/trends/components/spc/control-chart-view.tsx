@@ -1,5 +1,5 @@
 import { MenuItem, TextField } from '@mui/material';
-import type { SpcMeasure, TrendsFilter } from '@upstroke/contracts';
+import { type SpcMeasure, spcMeasureLabels, type TrendsFilter } from '@upstroke/contracts';
 import { useState } from 'react';
 import { ErrorState, Loading } from '../../../../components/ui/states';
 import { type BaselineMonths, useControlChart } from '../../api/get-control-chart';
@@ -8,7 +8,6 @@ import { ControlChartCanvas } from './control-chart-canvas';
 import { ControlPointsTable } from './control-points-table';
 import { type PointSelection, PointRecordsDialog } from './point-records-dialog';
 import { SignalsList } from './signals-list';
-import { spcMeasureLabels } from './spc-format';
 
 /**
  * A trend card's control-chart view: the chart, its signals in words, the committee's

@@ -9,7 +9,7 @@ import {
   ToggleButtonGroup,
   Typography,
 } from '@mui/material';
-import type { SpcProportion, TrendsFilter } from '@upstroke/contracts';
+import { type SpcProportion, spcMeasureLabels, type TrendsFilter } from '@upstroke/contracts';
 import { useState } from 'react';
 import { ClinicalCaution } from '../../../../components/ui/clinical-caution';
 import { ErrorState, Loading } from '../../../../components/ui/states';
@@ -17,7 +17,7 @@ import { type FunnelBy, useFunnel } from '../../api/get-funnel';
 import { FunnelCanvas } from './funnel-canvas';
 import { FunnelTable } from './funnel-table';
 import { type PointSelection, PointRecordsDialog } from './point-records-dialog';
-import { funnelMeasures, spcMeasureLabels } from './spc-format';
+import { funnelMeasures } from './spc-format';
 
 /**
  * Units (or sites) compared on a share against their volume: a small unit's share varies

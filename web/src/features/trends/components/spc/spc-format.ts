@@ -1,15 +1,5 @@
 import { formatPercent, type SpcMeasure, type SpcProportion } from '@upstroke/contracts';
 
-/** Words for each control-chart measure, as the committee reads them. */
-export const spcMeasureLabels: Record<SpcMeasure, string> = {
-  anyRosc: 'Any ROSC (share of records)',
-  compressionFractionMet: 'Compression fraction at or above target (share of records)',
-  etco2Documented: 'EtCO2 documented (share of records)',
-  compressionFraction: 'Median compression fraction',
-  timeToFirstShockSec: 'Median time to first shock, shockable (s)',
-  timeToFirstEpinephrineSec: 'Median time to first epinephrine, non-shockable (s)',
-};
-
 export const funnelMeasures: SpcProportion[] = [
   'anyRosc',
   'compressionFractionMet',
