@@ -118,6 +118,12 @@ describe('audit trail: sign-in, sign-out and every export; debrief mail to the o
       .expect(200);
     const { url, rec } = await signedRecord(t);
     const lead = ['Authorization', `Bearer ${await t.tokenFor('lead')}`] as const;
+    // The lead's e-mail form reads the domains from the recording context, to hint and check.
+    const context = await t
+      .http()
+      .get('/api/context')
+      .set(...lead);
+    expect(context.body.sites[0].mailDomains).toEqual(['kestrel.test']);
     const refused = await t
       .http()
       .post(`${url}/email`)

@@ -27,6 +27,8 @@ export const siteContextSchema = z.object({
   /** How dates and times are written for this site (absent in a tablet's older cache). */
   display: displayFormatSchema.optional(),
   units: z.array(z.object({ id: uuidSchema, name: z.string() })),
+  /** The organisation's e-mail domains: debrief e-mail goes only there (empty: any address). */
+  mailDomains: z.array(z.string()).optional(),
   profile: z
     .object({ id: uuidSchema, version: z.number().int(), thresholds: thresholdsSchema })
     .nullable(),
@@ -39,3 +41,30 @@ export const recordingContextSchema = z.object({
   sites: z.array(siteContextSchema),
 });
 export type RecordingContext = z.infer<typeof recordingContextSchema>;
+
+/** True when the address is at one of the domains or below one; with no domains, any address. */
+export function insideMailDomains(address: string, domains: readonly string[]): boolean {
+  if (domains.length === 0) return true;
+  const host = address
+    .slice(address.lastIndexOf('@') + 1)
+    .trim()
+    .toLowerCase();
+  return domains.some((d) => host === d || host.endsWith(`.${d}`));
+}
+
+/**
+ * Each recipient outside the organisation's domains, with the same message in the e-mail form
+ * and in the API's 400 (the path names the recipient's place in the list).
+ */
+export function mailDomainIssues(
+  recipients: readonly string[],
+  domains: readonly string[],
+): { path: string; message: string }[] {
+  return recipients
+    .map((address, i) => ({ address, i }))
+    .filter(({ address }) => !insideMailDomains(address, domains))
+    .map(({ address, i }) => ({
+      path: `recipients.${i}`,
+      message: `${address} is outside the organisation's e-mail domains (${domains.join(', ')})`,
+    }));
+}

@@ -8,6 +8,7 @@ export interface SiteRow {
   locale: string;
   timeZone: string;
   clock: '24h' | '12h';
+  mailDomains: string[];
 }
 export interface UnitRow {
   id: string;
@@ -31,7 +32,7 @@ export class SiteContextRepository {
     return this.db<SiteRow>('sites')
       .whereIn('id', ids)
       .orderBy('name')
-      .select('id', 'name', 'etco2Unit', 'locale', 'timeZone', 'clock');
+      .select('id', 'name', 'etco2Unit', 'locale', 'timeZone', 'clock', 'mailDomains');
   }
 
   /** The organisation's e-mail domains set on a site (empty: any address). */

@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import {
+  mailDomainIssues,
   type RecordingContext,
   type SiteContext,
   thresholdDefaults,
@@ -29,19 +30,7 @@ export class SiteContextService {
    * each address; a site with no domains set accepts any address.
    */
   async assertMailDomains(siteId: string, recipients: string[]): Promise<void> {
-    const domains = await this.repo.mailDomains(siteId);
-    if (domains.length === 0) return;
-    const inside = (address: string) => {
-      const host = address.slice(address.lastIndexOf('@') + 1).toLowerCase();
-      return domains.some((d) => host === d || host.endsWith(`.${d}`));
-    };
-    const details = recipients
-      .map((address, i) => ({ address, i }))
-      .filter(({ address }) => !inside(address))
-      .map(({ address, i }) => ({
-        path: `recipients.${i}`,
-        message: `${address} is outside the organisation's e-mail domains (${domains.join(', ')})`,
-      }));
+    const details = mailDomainIssues(recipients, await this.repo.mailDomains(siteId));
     if (details.length > 0) throw badRequest(details.map((d) => d.message).join('; '), details);
   }
 
@@ -59,6 +48,7 @@ export class SiteContextService {
         name: s.name,
         etco2Unit: s.etco2Unit,
         display: { locale: s.locale, timeZone: s.timeZone, clock: s.clock },
+        mailDomains: s.mailDomains,
         units: units.filter((u) => u.siteId === s.id).map((u) => ({ id: u.id, name: u.name })),
         profile: profileOf(profiles.find((p) => p.siteId === s.id)),
       })),

@@ -13,89 +13,116 @@ import {
   TextField,
   Typography,
 } from '@mui/material';
-import { useQuery } from '@tanstack/react-query';
-import { resuscitationSchema, rosterRoleLabel, sendDebriefEmailSchema } from '@upstroke/contracts';
+import {
+  mailDomainIssues,
+  type RosterMember,
+  rosterRoleLabel,
+  type SendDebriefEmail,
+  sendDebriefEmailSchema,
+} from '@upstroke/contracts';
 import { useState } from 'react';
-import { apiFetch } from '../../../lib/api-client';
+import { useEmailContext } from '../api/email-context';
 import { useSendDebriefEmail } from '../api/send-debrief-email';
 
-/** The record's team as entered on Live or the Board (the same query as Live's). */
-function useTeam(id: string) {
-  const record = useQuery({
-    queryKey: ['resuscitations', id, 'summary'],
-    queryFn: () => apiFetch(`/resuscitations/${id}`, { schema: resuscitationSchema }),
+/** The ticked team members and the typed addresses, each once (case aside). */
+function recipientsOf(ticked: string[], typed: string): string[] {
+  const seen = new Set<string>();
+  return [...ticked, ...typed.split(/[\s,;]+/).filter(Boolean)].filter((e) => {
+    const key = e.toLowerCase();
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
   });
-  const members = (record.data?.roster ?? []).filter((m) => m.email);
-  return { members, loading: record.isPending };
+}
+
+/** The body to send, or the message saying what to put right (format, then domains). */
+export function checkRecipients(
+  recipients: string[],
+  message: string,
+  domains: readonly string[],
+): { body: SendDebriefEmail } | { problem: string } {
+  const parsed = sendDebriefEmailSchema.safeParse({ recipients, message: message || undefined });
+  if (!parsed.success) return { problem: parsed.error.issues[0]?.message ?? 'Check the addresses' };
+  const outside = mailDomainIssues(recipients, domains);
+  if (outside.length > 0) return { problem: outside.map((i) => i.message).join('; ') };
+  return { body: parsed.data };
+}
+
+function TeamChoices(props: {
+  members: RosterMember[];
+  unticked: ReadonlySet<string>;
+  onToggle: (email: string) => void;
+}) {
+  return (
+    <FormGroup aria-labelledby="email-team">
+      <FormLabel id="email-team">Team present</FormLabel>
+      {props.members.map((m) => (
+        <FormControlLabel
+          key={m.email}
+          sx={{ minHeight: 48 }}
+          label={`${m.name} (${rosterRoleLabel(m.role)}) · ${m.email}`}
+          control={
+            <Checkbox
+              checked={!props.unticked.has(m.email as string)}
+              onChange={() => props.onToggle(m.email as string)}
+            />
+          }
+        />
+      ))}
+    </FormGroup>
+  );
 }
 
 /**
  * Sends the debrief summary, a link and the PDF: the team members with an e-mail address
- * are offered (all ticked), and other addresses can be added.
+ * are offered (all ticked), and other addresses within the organisation's domains can be added.
  */
 export function EmailDialog({ id, onClose }: { id: string; onClose: () => void }) {
   const [to, setTo] = useState('');
   const [message, setMessage] = useState('');
   const [invalid, setInvalid] = useState<string | null>(null);
   const [unticked, setUnticked] = useState<ReadonlySet<string>>(new Set());
-  const team = useTeam(id);
+  const ctx = useEmailContext(id);
   const send = useSendDebriefEmail(id);
   const toggle = (email: string) =>
     setUnticked((u) => {
       const next = new Set(u);
-      if (next.has(email)) next.delete(email);
-      else next.add(email);
+      if (!next.delete(email)) next.add(email);
       return next;
     });
   const submit = () => {
-    const typed = to.split(/[\s,;]+/).filter(Boolean);
-    const ticked = team.members.map((m) => m.email as string).filter((e) => !unticked.has(e));
-    const seen = new Set<string>();
-    const recipients = [...ticked, ...typed].filter((e) => {
-      const key = e.toLowerCase();
-      if (seen.has(key)) return false;
-      seen.add(key);
-      return true;
-    });
-    const parsed = sendDebriefEmailSchema.safeParse({ recipients, message: message || undefined });
-    if (!parsed.success)
-      return setInvalid(parsed.error.issues[0]?.message ?? 'Check the addresses');
+    const ticked = ctx.members.map((m) => m.email as string).filter((e) => !unticked.has(e));
+    const checked = checkRecipients(recipientsOf(ticked, to), message, ctx.domains);
+    if ('problem' in checked) return setInvalid(checked.problem);
     setInvalid(null);
-    send.mutate(parsed.data);
+    send.mutate(checked.body);
   };
+  const hint = ctx.domains.length
+    ? `Addresses at ${ctx.domains.join(', ')} only, separated by commas`
+    : 'E-mail addresses, separated by commas';
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="email-title">
       <DialogTitle id="email-title">E-mail the debrief</DialogTitle>
       <DialogContent>
         <Stack spacing={2} sx={{ mt: 1 }}>
-          {team.members.length > 0 ? (
-            <FormGroup aria-labelledby="email-team">
-              <FormLabel id="email-team">Team present</FormLabel>
-              {team.members.map((m) => (
-                <FormControlLabel
-                  key={m.email}
-                  sx={{ minHeight: 48 }}
-                  label={`${m.name} (${rosterRoleLabel(m.role)}) · ${m.email}`}
-                  control={
-                    <Checkbox
-                      checked={!unticked.has(m.email as string)}
-                      onChange={() => toggle(m.email as string)}
-                    />
-                  }
-                />
-              ))}
-            </FormGroup>
+          {!ctx.loading && !ctx.signed && (
+            <Alert severity="info">
+              This record is not signed: the subject says “Draft — not signed”.
+            </Alert>
+          )}
+          {ctx.members.length > 0 ? (
+            <TeamChoices members={ctx.members} unticked={unticked} onToggle={toggle} />
           ) : (
-            !team.loading && (
+            !ctx.loading && (
               <Typography color="text.secondary">
-                No team member has an e-mail address yet: add them under Team on Live or the Board
-                to offer them here.
+                No team member of this record has an e-mail address (the team is entered under Team
+                on Live during the code). Type the addresses below.
               </Typography>
             )
           )}
           <TextField
-            label={team.members.length ? 'Other recipients' : 'Recipients'}
-            helperText="E-mail addresses, separated by commas"
+            label={ctx.members.length ? 'Other recipients' : 'Recipients'}
+            helperText={invalid ?? hint}
             value={to}
             onChange={(e) => setTo(e.target.value)}
             error={Boolean(invalid)}
@@ -107,7 +134,6 @@ export function EmailDialog({ id, onClose }: { id: string; onClose: () => void }
             value={message}
             onChange={(e) => setMessage(e.target.value)}
           />
-          {invalid && <Alert severity="error">{invalid}</Alert>}
           {send.error && <Alert severity="error">{send.error.message}</Alert>}
           {send.data && (
             <Alert severity={send.data.status === 'sent' ? 'success' : 'info'} role="status">
