@@ -1,4 +1,4 @@
-import { type DynamicModule, Module } from '@nestjs/common';
+import { type DynamicModule, Module, RequestMethod } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { LoggerModule } from 'nestjs-pino';
 import { JwtAuthGuard, RolesGuard } from './common/auth.guards';
@@ -33,6 +33,8 @@ export class AppModule {
       global: true,
       imports: [
         LoggerModule.forRoot({
+          // Every route, in the path syntax of Express 5 (a bare `*` is converted with a warning).
+          forRoutes: [{ path: '{*path}', method: RequestMethod.ALL }],
           pinoHttp: {
             level: config.logLevel,
             // Tokens and passwords never reach the log.
