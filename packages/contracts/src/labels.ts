@@ -168,6 +168,7 @@ export const mailStatusLabels: Words<'queued' | 'sent' | 'failed'> = {
 export const auditActionLabels: Readonly<Record<string, string>> = {
   'sign-in': 'Signed in',
   'sign-in.failed': 'Failed sign-in',
+  'sign-in.throttled': 'Sign-ins held back (too many attempts)',
   'sign-out': 'Signed out',
   create: 'Record started',
   update: 'Record changed',
