@@ -1,5 +1,8 @@
 // `npm run bench`: starts the built app on its own database, then runs every
 // bench/*.bench.ts; each merges its figures into bench/results.json under its own key.
+// Benchmarks report, they do not fail: a missed target is listed at the end (`pass: false`
+// in the results) and leaves the exit code 0. Only a benchmark that could not measure (it
+// threw, so its figures are stale) or an app that did not start makes the run exit 1.
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
@@ -42,8 +45,8 @@ async function main() {
   migrateAndSeed(root, databaseUrl);
   buildAll(root);
   log('── JavaScript per first screen (scripts/bundle-budget.mjs)');
-  const budgetOk =
-    (await runAsync('node', ['scripts/bundle-budget.mjs', '--record'], { cwd: root })) === 0;
+  // Over budget is reported like any missed target here; `npm test` is what enforces it.
+  await runAsync('node', ['scripts/bundle-budget.mjs', '--record'], { cwd: root });
   const server = spawn('node', ['api/dist/src/main.js'], {
     cwd: root,
     stdio: ['ignore', 'ignore', 'inherit'],
@@ -67,7 +70,7 @@ async function main() {
       (f) => f.endsWith('.bench.ts') && (only.length === 0 || only.some((o) => f.startsWith(o))),
     )
     .sort();
-  let failed = 0;
+  const failed = [];
   for (const file of files) {
     log(`── bench/${file}`);
     const code = await runAsync('npx', ['tsx', path.join('bench', file)], {
@@ -79,12 +82,22 @@ async function main() {
         BENCH_DATABASE_URL: databaseUrl,
       },
     });
-    if (code !== 0) failed += 1;
+    if (code !== 0) failed.push(file);
   }
-  log(
-    `benchmarks done (${files.length - failed} ok, ${failed} failed); results in bench/results.json`,
+  const missed = missedTargets(
+    JSON.parse(fs.readFileSync(path.join(root, 'bench', 'results.json'), 'utf8')),
   );
-  return failed === 0 && budgetOk;
+  log(`targets missed (reported, not failed): ${missed.length ? missed.join(', ') : 'none'}`);
+  if (failed.length) log(`could not measure (exit 1): ${failed.join(', ')}`);
+  log(`benchmarks done; results in bench/results.json`);
+  return failed.length === 0;
+}
+
+/** The paths in the results whose figures say `pass: false` (e.g. `pdfHealth`). */
+function missedTargets(value, at = '') {
+  if (!value || typeof value !== 'object') return [];
+  if (value.pass === false) return [at || '(root)'];
+  return Object.entries(value).flatMap(([k, v]) => missedTargets(v, at ? `${at}.${k}` : k));
 }
 
 process.on('SIGINT', () => {
