@@ -161,9 +161,13 @@ describe('admin: sites and units, audit log, mail viewer', () => {
     expect(csv.headers['content-type']).toMatch(/^text\/csv/);
     const lines = csv.text.trim().split('\r\n');
     expect(lines[0]).toBe(
-      'at,userEmail,userName,action,entity,entityId,resuscitationId,deviceId,details',
+      'Time (ISO 8601 UTC),User e-mail,User name,Action,Action code,About,About id,Record id,Device id,Details (JSON)',
     );
     expect(lines).toHaveLength(1 + (await t.db('auditLog').where({ entity: 'site' })).length);
+    // Actions and what they were about in words; times in ISO 8601 UTC as the header says.
+    expect(lines[1]).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z,/);
+    const worded = /,(Site created|Site changed|Unit added|Unit renamed),(site|unit)\.[a-z]+,Site,/;
+    expect(lines.slice(1).filter((l) => !worded.test(l))).toEqual([]);
   });
 
   it('shows the sink messages with their decoded text and the outbox status', async () => {

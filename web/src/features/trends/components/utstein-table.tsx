@@ -3,6 +3,8 @@ import { formatPercent, type TrendsFilter, type UtsteinSummary } from '@upstroke
 import { useUtstein } from '../api/get-utstein';
 import { ErrorState, Loading } from '../../../components/ui/states';
 import { formatDuration } from '../../../lib/format';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
+import { periodText } from './filters-summary';
 
 type Median = UtsteinSummary['medians'][number];
 
@@ -21,13 +23,14 @@ const medianLabel = (m: Median) =>
 /** Utstein-style core elements for the filtered period: counts, shares and medians. */
 export function UtsteinTable({ filter }: { filter: TrendsFilter }) {
   const { data, error, isPending, refetch } = useUtstein(filter);
+  const { display } = useDisplayFormat(filter.siteId);
   if (isPending) return <Loading label="Loading the summary…" />;
   if (error) return <ErrorState error={error} onRetry={() => void refetch()} />;
   return (
     <>
       <Typography color="text.secondary" sx={{ mb: 1 }}>
-        Period: {data.from ?? 'first record'} to {data.to ?? 'today'} (end not included). Shares are
-        of all {data.total} treated arrests.
+        Period: {periodText({ from: data.from ?? undefined, to: data.to ?? undefined }, display)}.
+        Shares are of all {data.total} treated arrests.
       </Typography>
       <Table size="small" aria-label="Utstein-style summary">
         <TableHead>
