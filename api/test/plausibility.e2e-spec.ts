@@ -142,31 +142,6 @@ describe('plausibility bounds on writes', () => {
     });
   });
 
-  it('lets a lead discard refused entries with a reason, in the audit log; nothing else changes', async () => {
-    const id = await newRecord();
-    const item = {
-      id: randomUUID(),
-      kind: 'events',
-      refusal: 'at: more than 24 h after the arrest',
-    };
-    const url = `/api/resuscitations/${id}/discards`;
-    const recorder = `Bearer ${await t.tokenFor('recorder')}`;
-    const byRecorder = await t
-      .http()
-      .post(url)
-      .set('Authorization', recorder)
-      .send({ reason: 'typo', items: [item] });
-    expect(byRecorder.status).toBe(403);
-    expect((await post(url, { reason: '', items: [item] })).status).toBe(400);
-    const res = await post(url, { reason: 'Entered on the wrong code', items: [item] });
-    expect(res.status).toBe(201);
-    expect(res.body).toEqual({ discarded: 1 });
-    const audit = await t.db('auditLog').where({ resuscitationId: id, action: 'discard-refused' });
-    expect(audit).toHaveLength(1);
-    expect(audit[0].details).toEqual({ reason: 'Entered on the wrong code', items: [item] });
-    expect(await t.db('resuscitationEvents').where({ resuscitationId: id })).toHaveLength(0);
-  });
-
   it.each([
     '/api/trends?from=0000-01-01',
     '/api/trends/records?from=0000-01-01',

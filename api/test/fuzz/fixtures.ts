@@ -121,7 +121,14 @@ export const validBodies: Record<string, () => unknown> = {
   }),
   'POST /api/resuscitations/{id}/discards': () => ({
     reason: 'Entered on the wrong code',
-    items: [{ id: randomUUID(), kind: 'events', refusal: 'at: more than 24 h after the arrest' }],
+    items: [
+      {
+        id: randomUUID(),
+        kind: 'events',
+        refusal: 'at: more than 24 h after the arrest',
+        content: '{"kind":"note","data":{"text":"Wrong code"}}',
+      },
+    ],
   }),
   'POST /api/resuscitations/{id}/amendments': () => ({
     reason: 'A second line was placed and not entered',

@@ -1,21 +1,37 @@
 import { z } from 'zod';
 import { uuidSchema } from './common.js';
 
+/** Most characters of one discarded entry's content kept in the audit log. */
+export const DISCARD_CONTENT_MAX = 20_000;
+
 /**
  * `POST /resuscitations/:id/discards`: a lead gives up, with a reason, on entries the server
- * refused. The tablet keeps them (marked discarded); the server records who, why and what.
+ * refused. The tablet drops them from its outbox (they stay in its store, marked discarded);
+ * the server's audit log records who, why, the server's reason and each entry's content.
+ * `siteId` names the record's site when the server never received the record itself (its
+ * start was refused): the lead must belong to that site.
  */
 export const discardRefusedSchema = z
   .object({
     reason: z.string().trim().min(3, 'say why (at least 3 characters)').max(500),
+    siteId: uuidSchema.optional(),
     items: z
       .array(
         z
           .object({
             id: uuidSchema,
-            kind: z.enum(['events', 'etco2', 'waveform']),
-            /** The server's reason for refusing it, as the tablet kept it. */
+            /** `record`: the start or an update of the record itself. */
+            kind: z.enum(['events', 'etco2', 'waveform', 'record']),
+            /** The server's reason for refusing it, as the tablet kept it ('' when held back). */
             refusal: z.string().max(500),
+            /**
+             * The entry as the tablet kept it, as JSON text (so a refused NUL or lone surrogate
+             * arrives escaped, never raw); longer content is cut with a note.
+             */
+            content: z
+              .string()
+              .max(DISCARD_CONTENT_MAX + 100)
+              .optional(),
           })
           .strict(),
       )
@@ -24,6 +40,16 @@ export const discardRefusedSchema = z
   })
   .strict();
 export type DiscardRefused = z.infer<typeof discardRefusedSchema>;
+
+/** The JSON text of an entry for a discard, cut to the stored length with a note. */
+export function discardContent(entry: unknown): string {
+  const text = JSON.stringify(entry) ?? 'null';
+  if (text.length <= DISCARD_CONTENT_MAX) return text;
+  // Never cut between the two halves of a surrogate pair (that would leave a lone one).
+  const high = /[\uD800-\uDBFF]/.test(text.charAt(DISCARD_CONTENT_MAX - 1));
+  const end = high ? DISCARD_CONTENT_MAX - 1 : DISCARD_CONTENT_MAX;
+  return `${text.slice(0, end)}… (cut: ${text.length} characters in all)`;
+}
 
 export const discardResultSchema = z.object({ discarded: z.number().int().nonnegative() });
 export type DiscardResult = z.infer<typeof discardResultSchema>;

@@ -37,6 +37,10 @@ export class AuditLogRepository {
           this.db('resuscitations').whereIn('siteId', sites).select('id'),
         )
         .orWhereRaw(`a.entity = 'site' and a.entity_id = any(?::text[])`, [sites])
+        // Discards name their site (the record may never have reached the server).
+        .orWhereRaw(`a.action = 'discard-refused' and a.details->>'siteId' = any(?::text[])`, [
+          sites,
+        ])
         .orWhereRaw(`a.entity = 'protocol-profile' and a.details->>'siteId' = any(?::text[])`, [
           sites,
         ])

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { type AuthUser, canSeeSite } from '../../common/auth.decorators';
-import { conflict, forbidden, notFound } from '../../common/errors';
+import { badRequest, conflict, forbidden, notFound } from '../../common/errors';
 import { type ResuscitationRow, ResuscitationsRepository } from './resuscitations.repository';
 
 /** Who may read or write one record: site scope, role, ownership and the signature lock. */
@@ -26,5 +26,25 @@ export class ResuscitationAccess {
     if (record.status === 'signed')
       throw conflict('This record is signed and locked; add an amendment instead');
     return record;
+  }
+
+  /**
+   * The site a discard of refused entries belongs to: the record's own, or (for a record the
+   * server never received, its start having been refused) the site the tablet names, which
+   * must be one of the user's. A record of another site stays absent (404).
+   */
+  async discardSite(
+    user: AuthUser,
+    id: string,
+    siteId?: string,
+  ): Promise<{ siteId: string; onServer: boolean }> {
+    const record = await this.records.findById(id);
+    if (record) {
+      if (!canSeeSite(user, record.siteId)) throw notFound('Resuscitation');
+      return { siteId: record.siteId, onServer: true };
+    }
+    if (!siteId) throw badRequest('siteId: required for a record the server never received');
+    if (!canSeeSite(user, siteId)) throw forbidden('siteId: not one of your sites');
+    return { siteId, onServer: false };
   }
 }

@@ -66,17 +66,18 @@ export class SyncService {
   }
 
   /**
-   * A lead gives up on entries the server refused: nothing is stored or deleted, the audit
-   * log keeps who discarded what and why (the tablet keeps the entries, marked discarded).
+   * A lead gives up on entries the server refused (or held back behind a refused start):
+   * nothing is stored or deleted; the audit log keeps who discarded what (each entry's
+   * content and the server's reason) and why. Works for a record the server never received.
    */
   async discard(user: AuthUser, id: string, body: DiscardRefused): Promise<DiscardResult> {
-    await this.access.readable(user, id);
+    const { siteId, onServer } = await this.access.discardSite(user, id, body.siteId);
     await this.audit.insert({
       userId: user.id,
       action: 'discard-refused',
       entity: 'syncItems',
       resuscitationId: id,
-      details: { reason: body.reason, items: body.items },
+      details: { reason: body.reason, siteId, recordOnServer: onServer, items: body.items },
     });
     return { discarded: body.items.length };
   }

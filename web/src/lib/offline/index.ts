@@ -22,8 +22,8 @@ export { type LocalRecord, storedFromLocal } from './stored-record';
 export { useSyncState, type SyncState } from './use-sync-state';
 export { useRemoteEntries } from './use-remote-entries';
 export { apiTransport } from './transport';
+export { discardRefused } from './discard-refused';
 export {
-  discardRefused,
   listSyncProblems,
   retrySyncProblems,
   type RefusedItem,

@@ -5,7 +5,8 @@ import { countRefused, countWaiting, drainOutbox } from './outbox';
 import { recordEtco2, recordEvent, startResuscitation } from './record';
 import { ClockRefusedError } from './send-batch';
 import { SyncEngine } from './sync-engine';
-import { discardRefused, listSyncProblems } from './sync-problems';
+import { discardRefused } from './discard-refused';
+import { listSyncProblems } from './sync-problems';
 
 const siteId = '0b7e6a50-3b1e-4c55-9a51-6a0b7d2d1a01';
 let db: OfflineDb;
@@ -113,7 +114,15 @@ describe('one bad item never stalls the outbox', () => {
         id: rec.id,
         body: {
           reason: 'Typed on the wrong code',
-          items: [{ id: events[1].id, kind: 'events', refusal: 'value: bad' }],
+          siteId,
+          items: [
+            {
+              id: events[1].id,
+              kind: 'events',
+              refusal: 'value: bad',
+              content: JSON.stringify(events[1]),
+            },
+          ],
         },
       },
     ]);

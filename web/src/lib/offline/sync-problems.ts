@@ -1,7 +1,6 @@
 import { eventLabel } from '@upstroke/contracts';
 import type { OfflineDb } from './db';
 import { failedOps } from './outbox';
-import type { BatchKind, SyncTransport } from './transport';
 import { writeSignal } from './write-signal';
 
 /** A record-level write (start, details, team) the server refused for good. */
@@ -77,57 +76,20 @@ export async function listSyncProblems(db: OfflineDb): Promise<SyncProblems> {
 /**
  * Sends everything refused again (after, say, an administrator gave access to the site or
  * the profile changed): refused operations and items go back in the queue as they are.
- * Nothing is deleted or changed. Returns how many were put back.
+ * Nothing is deleted or changed. Only one record's when `recordId` is given. Returns how many
+ * were put back.
  */
-export async function retrySyncProblems(db: OfflineDb): Promise<number> {
+export async function retrySyncProblems(db: OfflineDb, recordId?: string): Promise<number> {
+  const mine = (r: { resuscitationId: string }) => !recordId || r.resuscitationId === recordId;
   const count = await db.transaction('rw', db.outbox, db.acks, async () => {
-    const ops = await failedOps(db).toArray();
+    const ops = (await failedOps(db).toArray()).filter(mine);
     for (const o of ops) await db.outbox.update(o.seq as number, { failed: undefined });
-    const refused = await db.acks.where('state').equals(2).primaryKeys();
+    const refused = (await db.acks.where('state').equals(2).toArray())
+      .filter(mine)
+      .map((a) => a.id);
     await db.acks.bulkDelete(refused);
     return ops.length + refused.length;
   });
   if (count) writeSignal.emit();
   return count;
-}
-
-async function kindsOf(db: OfflineDb, ids: string[]): Promise<BatchKind[]> {
-  const [events, values] = await Promise.all([db.events.bulkGet(ids), db.etco2.bulkGet(ids)]);
-  return ids.map((_, i) => (events[i] ? 'events' : values[i] ? 'etco2' : 'waveform'));
-}
-
-/**
- * A lead gives up on refused entries (all of them, or those named), with a reason. The
- * server's audit log records who, what and why first; then each entry is marked discarded
- * here: kept on the tablet, no longer counted as refused. Returns how many were discarded.
- */
-export async function discardRefused(
-  db: OfflineDb,
-  transport: Pick<SyncTransport, 'discard'>,
-  reason: string,
-  ids?: string[],
-): Promise<number> {
-  const refused = (await db.acks.where('state').equals(2).toArray()).filter(
-    (a) => !ids || ids.includes(a.id),
-  );
-  const byRecord = new Map<string, typeof refused>();
-  for (const a of refused)
-    byRecord.set(a.resuscitationId, [...(byRecord.get(a.resuscitationId) ?? []), a]);
-  for (const [recordId, acks] of byRecord) {
-    for (let i = 0; i < acks.length; i += 5000) {
-      const part = acks.slice(i, i + 5000);
-      const kinds = await kindsOf(
-        db,
-        part.map((a) => a.id),
-      );
-      const items = part.map((a, j) => ({
-        id: a.id,
-        kind: kinds[j],
-        refusal: (a.reason ?? '').slice(0, 500),
-      }));
-      await transport.discard(recordId, { reason, items });
-      await db.acks.bulkPut(part.map((a) => ({ ...a, state: 3 as const, discardReason: reason })));
-    }
-  }
-  return refused.length;
 }

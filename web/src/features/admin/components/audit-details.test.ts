@@ -56,4 +56,17 @@ describe('audit details', () => {
     ).toBe('E-mail address: x@k.test; Reason: wrong password');
     expect(auditDetailsText(entry('export.csv', { filter: {} }))).toBe('Filter: none');
   });
+
+  it("words each discarded entry: its kind, the server's reason and its content", () => {
+    const details = {
+      reason: 'Typed on the wrong code',
+      recordOnServer: false,
+      items: [{ id: 'e1', kind: 'events', refusal: 'at: late', content: '{"kind":"note"}' }],
+    };
+    expect(otherDetails(entry('discard-refused', details))).toEqual([
+      ['Reason', 'Typed on the wrong code'],
+      ['Record on the server', 'No'],
+      ['Entries', `(1) Id: e1; Kind: events; Server's reason: at: late; Content: {"kind":"note"}`],
+    ]);
+  });
 });

@@ -40,6 +40,12 @@ const fieldLabels: Record<string, string> = {
   version: 'Version',
   unitId: 'Unit id',
   from: 'From',
+  items: 'Entries',
+  id: 'Id',
+  kind: 'Kind',
+  refusal: "Server's reason",
+  content: 'Content',
+  recordOnServer: 'Record on the server',
 };
 
 /** "lowEtco2MmHg" → its threshold label; other keys from the table or split at capitals. */
@@ -58,7 +64,14 @@ export function valueText(key: string, value: unknown, sites?: SiteNamer): strin
     const ids = Array.isArray(value) ? (value as string[]) : [String(value)];
     return sites(ids) || ids.join(', ');
   }
-  if (Array.isArray(value)) return value.length ? value.map(String).join(', ') : '—';
+  if (Array.isArray(value)) {
+    if (value.length === 0) return '—';
+    // A list of objects (a discard's entries): each one in words, one after another.
+    const objects = value.some((v) => typeof v === 'object' && v !== null);
+    return objects
+      ? value.map((v, i) => `(${i + 1}) ${valueText(key, v, sites)}`).join(' ')
+      : value.map(String).join(', ');
+  }
   if (typeof value === 'object') {
     const parts = Object.entries(value as Record<string, unknown>).filter(
       ([, v]) => v !== undefined,

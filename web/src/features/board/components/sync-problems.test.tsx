@@ -8,6 +8,19 @@ import { SyncProblems } from './sync-problems';
 const recordId = '3d1f5a2b-6c7d-4e8f-9a0b-1c2d3e4f5a6b';
 const valueId = '4e2a6b3c-7d8e-4f9a-8b1c-2d3e4f5a6b7c';
 
+function signIn(role: 'lead' | 'recorder') {
+  authStore.set({
+    accessToken: 't',
+    user: {
+      id: recordId,
+      email: `${role}@kestrel.test`,
+      name: 'A. Person',
+      role,
+      siteIds: [],
+    },
+  } as unknown as Parameters<typeof authStore.set>[0]);
+}
+
 afterEach(async () => {
   authStore.clear();
   vi.restoreAllMocks();
@@ -40,6 +53,18 @@ describe('sync problems in the top bar', { timeout: 30_000 }, () => {
       reason: 'resuscitation is signed',
     });
     const user = userEvent.setup();
+    signIn('recorder');
+    const { unmount } = render(<SyncProblems />);
+    await user.click(await screen.findByRole('button', { name: 'Sync: 1 not accepted — show' }));
+    // A recorder sees the problem and its reason, but only a lead resolves it.
+    const seen = await screen.findByRole('dialog', { name: 'Not accepted by the server' });
+    expect(await within(seen).findByText('resuscitation is signed')).toBeVisible();
+    expect(within(seen).getByText(/Only a lead can send these again/)).toBeVisible();
+    expect(within(seen).queryByRole('button', { name: 'Send again' })).toBeNull();
+    expect(within(seen).queryByRole('button', { name: /Discard/ })).toBeNull();
+    unmount();
+
+    signIn('lead');
     render(<SyncProblems />);
     await user.click(await screen.findByRole('button', { name: 'Sync: 1 not accepted — show' }));
     const dialog = await screen.findByRole('dialog', { name: 'Not accepted by the server' });
@@ -70,16 +95,7 @@ describe('sync problems in the top bar', { timeout: 30_000 }, () => {
       state: 2,
       reason: 'at: late',
     });
-    authStore.set({
-      accessToken: 't',
-      user: {
-        id: recordId,
-        email: 'lead@kestrel.test',
-        name: 'A. Lead',
-        role: 'lead',
-        siteIds: [],
-      },
-    } as unknown as Parameters<typeof authStore.set>[0]);
+    signIn('lead');
     const fetchMock = vi
       .spyOn(globalThis, 'fetch')
       .mockResolvedValue(new Response(JSON.stringify({ discarded: 1 }), { status: 201 }));
@@ -96,8 +112,10 @@ describe('sync problems in the top bar', { timeout: 30_000 }, () => {
     expect(url).toBe(`/api/resuscitations/${recordId}/discards`);
     expect(JSON.parse(init.body as string)).toEqual({
       reason: 'Entered on the wrong code',
-      items: [{ id: valueId, kind: 'etco2', refusal: 'at: late' }],
+      items: [{ id: valueId, kind: 'etco2', refusal: 'at: late', content: expect.any(String) }],
     });
+    // The badge goes once every refused entry is resolved.
+    expect(screen.queryByRole('button', { name: /not accepted — show/ })).toBeNull();
     expect(await offlineDb.acks.get(valueId)).toMatchObject({ state: 3 });
     expect(await offlineDb.etco2.get(valueId)).toMatchObject({ value: 12 });
   });

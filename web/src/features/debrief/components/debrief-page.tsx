@@ -13,6 +13,7 @@ import { FindingsList } from './findings-list';
 import { type ImportPanelSlot, ImportSlot } from './import-slot';
 import { LeadNotes } from './lead-notes';
 import { MeasureCards } from './measure-cards';
+import { RefusedSection } from './refused-section';
 import { TimelineSection } from './timeline-section';
 import { type Band, timelineModel, viewAround } from './timeline-model';
 
@@ -72,6 +73,7 @@ export function DebriefPage({ importPanel }: { importPanel: ImportPanelSlot }) {
           the network.
         </Alert>
       )}
+      <RefusedSection resuscitationId={id} />
       <ClinicalCaution />
       {model && (
         <TimelineSection

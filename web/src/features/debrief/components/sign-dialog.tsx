@@ -37,7 +37,8 @@ function useRefusedHere(id: string): number | undefined {
 /**
  * Signing with intent: what signing means, what is still unresolved, and an explicit
  * confirmation. Missing closing details block signing; refused entries are named so the lead
- * can resolve them first (send again or discard with a reason, on the Board).
+ * can resolve them first (send again or discard with a reason, in the Debrief's "Not accepted
+ * by the server" section or from the top bar).
  */
 export function SignDialog({ resuscitationId, missing, pending, onConfirm, onClose }: Props) {
   const refused = useRefusedHere(resuscitationId) ?? 0;

@@ -1,23 +1,22 @@
 import { Alert, Button, Stack, TextField } from '@mui/material';
-import { useState, useSyncExternalStore } from 'react';
-import { authStore } from '../../../lib/auth-store';
-import { apiTransport, discardRefused, offlineDb } from '../../../lib/offline';
+import { useState } from 'react';
+import { apiTransport, discardRefused, offlineDb } from '../../lib/offline';
 
 /**
- * For a lead: give up on the refused entries, saying why. The server's audit log keeps who,
- * what and why; the entries stay on this tablet, marked discarded. Never silent.
+ * For a lead: give up on the refused entries (of one record, or all), saying why. The
+ * server's audit log keeps who, what and why first; then the tablet takes them out of its
+ * outbox (kept in its store, marked discarded). Never silent.
  */
-export function DiscardRefused({ count }: { count: number }) {
-  const session = useSyncExternalStore(authStore.subscribe, authStore.get);
+export function DiscardRefused({ count, recordId }: { count: number; recordId?: string }) {
   const [reason, setReason] = useState('');
   const [result, setResult] = useState<{ ok: boolean; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
-  if (session?.user.role !== 'lead' || (count === 0 && !result)) return null;
+  if (count === 0 && !result) return null;
   const tooShort = reason.trim().length < 3;
   const discard = async () => {
     setBusy(true);
     try {
-      const n = await discardRefused(offlineDb, apiTransport, reason.trim());
+      const n = await discardRefused(offlineDb, apiTransport, reason.trim(), recordId);
       setResult({ ok: true, text: `${n} discarded; the audit log records your reason.` });
       setReason('');
     } catch (e) {
@@ -47,7 +46,7 @@ export function DiscardRefused({ count }: { count: number }) {
             size="small"
             fullWidth
             slotProps={{ htmlInput: { maxLength: 500 } }}
-            helperText="Kept on this tablet and recorded in the audit log with your name"
+            helperText="Recorded in the audit log with your name and each entry's content"
           />
           <Button
             color="warning"
