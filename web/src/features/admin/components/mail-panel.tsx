@@ -1,6 +1,6 @@
 import { Alert, Button, Chip, Stack, Typography } from '@mui/material';
 import { DataGrid, type GridColDef, type GridPaginationModel } from '@mui/x-data-grid';
-import type { MailSinkMessage } from '@upstroke/contracts';
+import { labelOf, mailStatusLabels, type MailSinkMessage } from '@upstroke/contracts';
 import { useState } from 'react';
 import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { ErrorState } from '../../../components/ui/states';
@@ -66,7 +66,7 @@ export function MailPanel() {
           Object.entries(outbox).map(([status, n]) => (
             <Chip
               key={status}
-              label={`${status}: ${n}`}
+              label={`${labelOf(mailStatusLabels, status)}: ${n}`}
               color={status === 'failed' ? 'error' : 'default'}
             />
           ))}

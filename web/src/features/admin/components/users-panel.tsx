@@ -1,7 +1,7 @@
 import PersonAdd from '@mui/icons-material/PersonAdd';
 import { Alert, Button, Chip, Stack } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
-import type { AdminUser } from '@upstroke/contracts';
+import { type AdminUser, roleLabels } from '@upstroke/contracts';
 import { useState } from 'react';
 import { EmptyState, ErrorState } from '../../../components/ui/states';
 import { useUsers } from '../api/list-users';
@@ -18,7 +18,12 @@ export function UsersPanel() {
   const columns: GridColDef<AdminUser>[] = [
     { field: 'name', headerName: 'Name', flex: 1, minWidth: 160 },
     { field: 'email', headerName: 'E-mail', flex: 1, minWidth: 200 },
-    { field: 'role', headerName: 'Role', width: 110 },
+    {
+      field: 'role',
+      headerName: 'Role',
+      width: 160,
+      valueGetter: (_v, row) => roleLabels[row.role],
+    },
     {
       field: 'siteIds',
       headerName: 'Sites',

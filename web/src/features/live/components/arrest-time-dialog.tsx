@@ -9,6 +9,7 @@ import {
   Typography,
 } from '@mui/material';
 import { useState } from 'react';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { MAX_EARLIER_MIN } from '../lib/arrest-time';
 
 const quick = [1, 2, 3, 5, 10];
@@ -26,7 +27,7 @@ export function ArrestTimeDialog(props: {
   const n = Number(minutes);
   const badMinutes = minutes !== '' && !(Number.isInteger(n) && n >= 0 && n <= MAX_EARLIER_MIN);
   const ready = minutes !== '' && !badMinutes && reason.trim() !== '';
-  const start = new Date(props.startAt).toLocaleTimeString();
+  const start = useDisplayFormat().time(props.startAt, true);
   return (
     <Dialog open={props.open} onClose={props.onClose} aria-labelledby="arrest-time-title">
       <DialogTitle id="arrest-time-title">Arrest time</DialogTitle>
