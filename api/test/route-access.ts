@@ -60,6 +60,7 @@ export const routeAccess: Record<string, Role[] | 'public'> = {
   'GET /api/trends/utstein.csv': ['quality', 'admin', 'lead'],
   'GET /api/trends/control-chart': ['quality', 'admin', 'lead'],
   'GET /api/trends/funnel': ['quality', 'admin', 'lead'],
+  'GET /api/trends/monthly-report.pdf': ['quality', 'admin'],
   'GET /api/reviews': ['quality', 'admin', 'lead'],
   'GET /api/reviews/{resuscitationId}': ['quality', 'admin', 'lead'],
   'POST /api/reviews/{resuscitationId}': ['quality'],

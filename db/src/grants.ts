@@ -29,6 +29,8 @@ export const tableGrants: Record<string, { privileges: Privilege[]; updateColumn
   mail_outbox: { privileges: ['select', 'insert', 'update'] },
   mail_sink_messages: { privileges: ['select', 'insert'] },
   sign_in_attempts: { privileges: ['select', 'insert', 'delete'] },
+  // A month's send, claimed once per site; never changed afterwards.
+  committee_report_sends: { privileges: ['select', 'insert'] },
   knex_migrations: { privileges: [] },
   knex_migrations_lock: { privileges: [] },
 };

@@ -17,3 +17,4 @@ export * from './formats.js';
 export * from './etco2-units.js';
 export * from './discards.js';
 export * from './spc.js';
+export * from './committee-report.js';

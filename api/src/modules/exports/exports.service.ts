@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import type { Debrief } from '@upstroke/contracts';
+import type { CommitteeReportData, Debrief } from '@upstroke/contracts';
 import type { AuthUser } from '../../common/auth.decorators';
 import { forbidden } from '../../common/errors';
 import { APP_CONFIG, type AppConfig } from '../../config';
@@ -42,6 +42,15 @@ export class ExportsService {
     const bytes = await this.pool.run('report', d, {
       version: appVersion(),
       generatedAt: new Date(),
+    });
+    return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  }
+
+  /** Renders the monthly committee report (gathered by the trends module), in a worker. */
+  async committeeReportPdf(data: CommitteeReportData, generatedAt: Date): Promise<Buffer> {
+    const bytes = await this.pool.run('committeeReport', data, {
+      version: appVersion(),
+      generatedAt,
     });
     return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   }

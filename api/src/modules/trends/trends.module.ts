@@ -1,4 +1,8 @@
 import { Module } from '@nestjs/common';
+import { ExportsModule } from '../exports/exports.module';
+import { CommitteeReportController } from './committee-report.controller';
+import { CommitteeReportRepository } from './committee-report.repository';
+import { CommitteeReportService } from './committee-report.service';
 import { ControlChartService } from './control-chart.service';
 import { FunnelService } from './funnel.service';
 import { SpcController } from './spc.controller';
@@ -9,7 +13,8 @@ import { TrendsService } from './trends.service';
 import { UtsteinService } from './utstein.service';
 
 @Module({
-  controllers: [TrendsController, SpcController],
+  imports: [ExportsModule],
+  controllers: [TrendsController, SpcController, CommitteeReportController],
   providers: [
     TrendsRepository,
     TrendsService,
@@ -17,7 +22,15 @@ import { UtsteinService } from './utstein.service';
     SpcRepository,
     ControlChartService,
     FunnelService,
+    CommitteeReportRepository,
+    CommitteeReportService,
   ],
-  exports: [TrendsService, UtsteinService, ControlChartService, FunnelService],
+  exports: [
+    TrendsService,
+    UtsteinService,
+    ControlChartService,
+    FunnelService,
+    CommitteeReportService,
+  ],
 })
 export class TrendsModule {}

@@ -29,3 +29,15 @@ export function monthsBetween(from?: string, to?: string, toIsExclusive = false)
   for (let m = monthOf(from); m <= last && out.length < 240; m = addMonth(m)) out.push(m);
   return out;
 }
+
+/** `YYYY-MM` moved by `n` calendar months (negative goes back). */
+export function addMonths(month: string, n: number): string {
+  const [y, m] = month.split('-').map(Number);
+  const i = y * 12 + (m - 1) + n;
+  return `${Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')}`;
+}
+
+/** The calendar month (UTC) before the one holding `now`: the month a report on the 1st covers. */
+export function previousMonth(now: Date): string {
+  return addMonths(now.toISOString().slice(0, 7), -1);
+}

@@ -1,4 +1,7 @@
-import { formatPercent, type SpcMeasure, type SpcProportion } from '@upstroke/contracts';
+import { formatSpcValue, type SpcMeasure, type SpcProportion } from '@upstroke/contracts';
+
+/** A value in words for tables and the screen reader (shared with the monthly report PDF). */
+export { formatSpcValue };
 
 export const funnelMeasures: SpcProportion[] = [
   'anyRosc',
@@ -15,7 +18,3 @@ export const axisUnit = (m: SpcMeasure) => (isSeconds(m) ? 's' : '%');
 /** A value as charted: percent for shares and compression fraction, seconds for times. */
 export const chartValue = (m: SpcMeasure, v: number | null) =>
   v === null ? null : isSeconds(m) ? Math.round(v) : Math.round(v * 1000) / 10;
-
-/** A value in words for tables and the screen reader. */
-export const formatSpcValue = (m: SpcMeasure, v: number | null) =>
-  v === null ? '—' : isSeconds(m) ? `${Math.round(v)} s` : formatPercent(v, 1);
