@@ -6,6 +6,7 @@ import { downloadCsv } from '../api/download-csv';
 import { useTrends } from '../api/get-trends';
 import { useTrendsFilter } from '../hooks/use-trends-filter';
 import { FiltersSummary } from './filters-summary';
+import { MonthlyReportButton } from './monthly-report-button';
 import { RecordsGrid } from './records-grid';
 import { FunnelSection } from './spc/funnel-section';
 import { type ChartSpec, TrendChart } from './trend-chart';
@@ -91,6 +92,7 @@ export function TrendsPage() {
             <Button variant="outlined" onClick={() => download('utstein')}>
               Export summary CSV
             </Button>
+            <MonthlyReportButton filter={filter} />
             <Button variant="outlined" onClick={() => window.print()}>
               Print
             </Button>
