@@ -4,6 +4,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import type { ControlChartResponse, UtsteinSummary } from '@upstroke/contracts';
+import { binaryBody } from './binary-body';
 import { type FixtureRow, insertFixture } from './quality-fixtures';
 import { demoSiteId, demoUnits, startTestApp, type TestApp } from './test-app';
 
@@ -52,15 +53,6 @@ const rows = [
 const squash = (s: string) => s.replace(/\s+/g, ' ');
 const pct = (v: number | null) => (v === null ? '—' : `${(v * 100).toFixed(1)} %`);
 
-function binary(
-  res: { on: (e: string, cb: (c?: Buffer) => void) => void },
-  cb: (e: Error | null, b: Buffer) => void,
-) {
-  const parts: Buffer[] = [];
-  res.on('data', (c) => parts.push(c as Buffer));
-  res.on('end', () => cb(null, Buffer.concat(parts)));
-}
-
 describe('monthly committee report', () => {
   let t: TestApp;
   const auth = async (role: 'recorder' | 'lead' | 'quality' | 'admin') =>
@@ -78,7 +70,7 @@ describe('monthly committee report', () => {
       .get(`/api/trends/monthly-report.pdf?${query}`)
       .set(...header)
       .buffer(true)
-      .parse(binary);
+      .parse(binaryBody);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const file = path.join(tmp, `${randomUUID()}.pdf`);

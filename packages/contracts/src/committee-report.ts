@@ -1,6 +1,12 @@
 import { z } from 'zod';
 import { trendsFilterSchema, type UtsteinSummary } from './quality.js';
-import { type ControlChartResponse, monthSchema, type SpcMeasure } from './spc.js';
+import {
+  baselineInOrder,
+  baselineShape,
+  type ControlChartResponse,
+  monthSchema,
+  type SpcMeasure,
+} from './spc.js';
 import { type DisplayFormat, formatPercent } from './formats.js';
 
 /**
@@ -10,16 +16,9 @@ import { type DisplayFormat, formatPercent } from './formats.js';
  */
 export const committeeReportQuerySchema = trendsFilterSchema
   .omit({ from: true, to: true })
-  .extend({
-    month: monthSchema,
-    baselineFrom: monthSchema.optional(),
-    baselineTo: monthSchema.optional(),
-  })
+  .extend({ month: monthSchema, ...baselineShape })
   .strict()
-  .refine((q) => !q.baselineFrom || !q.baselineTo || q.baselineFrom <= q.baselineTo, {
-    path: ['baselineTo'],
-    error: 'the baseline must end on or after its first month',
-  });
+  .refine(...baselineInOrder);
 export type CommitteeReportQuery = z.infer<typeof committeeReportQuerySchema>;
 
 /** Months of history each control chart in the report shows, ending with the report month. */

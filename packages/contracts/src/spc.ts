@@ -38,18 +38,25 @@ export const isProportion = (m: SpcMeasure): m is SpcProportion =>
  */
 export const spcRecordsFilterSchema = trendsFilterSchema;
 
+/** First and last month (inclusive) of the baseline that fixes centre and limits. */
+export const baselineShape = {
+  baselineFrom: monthSchema.optional(),
+  baselineTo: monthSchema.optional(),
+};
+
+/** Refinement of a query with a baseline: it must not end before it starts. */
+export const baselineInOrder: [
+  (q: { baselineFrom?: string; baselineTo?: string }) => boolean,
+  { path: string[]; error: string },
+] = [
+  (q) => !q.baselineFrom || !q.baselineTo || q.baselineFrom <= q.baselineTo,
+  { path: ['baselineTo'], error: 'the baseline must end on or after its first month' },
+];
+
 export const controlChartQuerySchema = trendsFilterSchema
-  .extend({
-    measure: spcMeasureSchema,
-    /** First and last month (inclusive) of the baseline that fixes centre and limits. */
-    baselineFrom: monthSchema.optional(),
-    baselineTo: monthSchema.optional(),
-  })
+  .extend({ measure: spcMeasureSchema, ...baselineShape })
   .strict()
-  .refine((q) => !q.baselineFrom || !q.baselineTo || q.baselineFrom <= q.baselineTo, {
-    path: ['baselineTo'],
-    error: 'the baseline must end on or after its first month',
-  });
+  .refine(...baselineInOrder);
 export type ControlChartQuery = z.infer<typeof controlChartQuerySchema>;
 
 export const spcRuleSchema = z.enum(['beyond-limits', 'run-of-8']);
