@@ -10,10 +10,11 @@ import zlib from 'node:zlib';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const dist = process.env.WEB_DIST ?? path.join(root, 'web', 'dist');
-// `targetKB` is the goal; `budgetKB` is what npm test enforces. Live is not yet at its goal:
-// its dialogs, prompts, metronome and monitor panel now load after its first draw, but
-// react-dom and the router, MUI, zod with the contracts and Dexie are all needed before it is
-// usable. Its budget holds today's size (271 KB) so it can only shrink.
+// `targetKB` is the goal; `budgetKB` is what npm test enforces. Live's first screen needs
+// react-dom and the router, MUI, Dexie and its own code; zod (the schemas the sync checks the
+// server's answers against, the live feed) loads right after the first draw, so a module on
+// that path must not build a zod schema when it is evaluated (contracts keep schemas apart:
+// `display-settings.ts`, `profile-schema.ts`; capno's `events/corrections.ts`).
 const screens = {
   signIn: {
     targetKB: 250,
@@ -22,7 +23,7 @@ const screens = {
   },
   live: {
     targetKB: 250,
-    budgetKB: 275,
+    budgetKB: 250,
     sources: ['src/app/layout.tsx', 'src/background.ts', 'src/app/routes/live.tsx'],
   },
 };

@@ -16,11 +16,10 @@ export { etco2Measures, MAX_HOLD_SEC, stepSegments } from './etco2/segments.js';
 export {
   type CorrectableEvent,
   eventsInForce,
-  normalizeEvents,
   supersededByMap,
   supersededIds,
-  type TimedEvent,
-} from './events/normalize.js';
+} from './events/corrections.js';
+export { normalizeEvents, type TimedEvent } from './events/normalize.js';
 export {
   intervalsOf,
   nextState,

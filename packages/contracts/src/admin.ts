@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import { isoDateTimeSchema, roleSchema, uuidSchema } from './common.js';
-import { etco2DisplayUnitSchema } from './etco2-units.js';
-import { clockSchema, displayFormatSchema } from './formats.js';
+import { clockSchema, displayFormatSchema, etco2DisplayUnitSchema } from './display-settings.js';
 
 export * from './profile-fields.js';
 export * from './profile-guard.js';

@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { etco2DisplayUnitSchema } from './etco2-units.js';
+import { etco2DisplayUnitSchema } from './display-settings.js';
 import { ageGroupSchema, co2UnitSchema, isoDateTimeSchema } from './common.js';
 import { analysisEventSchema, endReasonSchema, rhythmSchema } from './events.js';
-import { profileInputSchema } from './profile.js';
+import { profileInputSchema } from './profile-schema.js';
 
 export const etco2SourceSchema = z.enum(['manual', 'stream', 'import', 'waveform']);
 export type Etco2Source = z.infer<typeof etco2SourceSchema>;

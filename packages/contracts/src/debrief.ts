@@ -2,10 +2,9 @@ export * from './event-labels.js';
 import { z } from 'zod';
 import { analysisOutputSchema, etco2PointSchema, etco2SourceSchema } from './analysis.js';
 import { co2UnitSchema, isoDateTimeSchema, uuidSchema } from './common.js';
-import { etco2DisplayUnitSchema } from './etco2-units.js';
+import { displayFormatSchema, etco2DisplayUnitSchema } from './display-settings.js';
 import { eventKindSchema } from './events.js';
-import { displayFormatSchema } from './formats.js';
-import { thresholdsSchema } from './profile.js';
+import { thresholdsSchema } from './profile-schema.js';
 import { patchResuscitationSchema, resuscitationSchema } from './resuscitations.js';
 import { timelineModelSchema } from './timeline.js';
 

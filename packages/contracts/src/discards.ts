@@ -1,8 +1,6 @@
 import { z } from 'zod';
 import { uuidSchema } from './common.js';
-
-/** Most characters of one discarded entry's content kept in the audit log. */
-export const DISCARD_CONTENT_MAX = 20_000;
+import { DISCARD_CONTENT_MAX } from './discard-content.js';
 
 /**
  * `POST /resuscitations/:id/discards`: a lead gives up, with a reason, on entries the server
@@ -40,16 +38,6 @@ export const discardRefusedSchema = z
   })
   .strict();
 export type DiscardRefused = z.infer<typeof discardRefusedSchema>;
-
-/** The JSON text of an entry for a discard, cut to the stored length with a note. */
-export function discardContent(entry: unknown): string {
-  const text = JSON.stringify(entry) ?? 'null';
-  if (text.length <= DISCARD_CONTENT_MAX) return text;
-  // Never cut between the two halves of a surrogate pair (that would leave a lone one).
-  const high = /[\uD800-\uDBFF]/.test(text.charAt(DISCARD_CONTENT_MAX - 1));
-  const end = high ? DISCARD_CONTENT_MAX - 1 : DISCARD_CONTENT_MAX;
-  return `${text.slice(0, end)}… (cut: ${text.length} characters in all)`;
-}
 
 export const discardResultSchema = z.object({ discarded: z.number().int().nonnegative() });
 export type DiscardResult = z.infer<typeof discardResultSchema>;

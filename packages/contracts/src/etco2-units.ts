@@ -3,10 +3,10 @@
  * mmHg; a site that works in kPa sees kPa on every screen, prompt, finding, PDF, CSV and
  * e-mail, written by these functions only, so no output can drift to another unit.
  */
-import { z } from 'zod';
+import type { z } from 'zod';
+import type { etco2DisplayUnitSchema } from './display-settings.js';
 import { formatPercent } from './formats.js';
 
-export const etco2DisplayUnitSchema = z.enum(['mmHg', 'kPa']);
 export type Etco2DisplayUnit = z.infer<typeof etco2DisplayUnitSchema>;
 
 /**

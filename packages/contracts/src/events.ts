@@ -98,19 +98,6 @@ type EventOf<K extends EventKind, Extra> = Extra & { kind: K; data: EventData<K>
 /** Events of every kind carrying the fields `Extra`, discriminated by `kind`. */
 export type AnyEventOf<Extra> = { [K in EventKind]: EventOf<K, Extra> }[EventKind];
 
-/**
- * One event of `kind` with its data and the fields `extra`, as the discriminated union.
- * TypeScript cannot choose the union member for a generic kind; the pairing of `kind` and
- * `data` is checked here by the signature, so callers need no cast.
- */
-export function eventOfKind<K extends EventKind, Extra extends object>(
-  extra: Extra,
-  kind: K,
-  data: EventData<K>,
-): AnyEventOf<Extra> {
-  return { ...extra, kind, data } as AnyEventOf<Extra>;
-}
-
 export type ResusEvent = AnyEventOf<{
   id: string;
   resuscitationId: string;

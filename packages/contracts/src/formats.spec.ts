@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { displayFormatSchema } from './display-settings.js';
 import {
   defaultDisplayFormat,
-  displayFormatSchema,
   formatDate,
   formatDateTime,
   formatPercent,

@@ -4,39 +4,10 @@
  * these, so a record reads the same in every output. Machine values (ISO-8601 in the API and
  * FHIR) are never formatted here.
  */
-import { z } from 'zod';
+import type { z } from 'zod';
+import type { displayFormatSchema } from './display-settings.js';
 
-function isTimeZone(tz: string): boolean {
-  try {
-    new Intl.DateTimeFormat('en', { timeZone: tz });
-    return true;
-  } catch {
-    return false;
-  }
-}
-
-function isLocale(tag: string): boolean {
-  try {
-    return Intl.getCanonicalLocales(tag).length === 1;
-  } catch {
-    return false;
-  }
-}
-
-export const clockSchema = z.enum(['24h', '12h']);
-export const displayFormatSchema = z.object({
-  locale: z
-    .string()
-    .trim()
-    .max(35)
-    .refine(isLocale, { error: 'Enter a language tag such as en-GB or fr-CA' }),
-  timeZone: z
-    .string()
-    .trim()
-    .max(64)
-    .refine(isTimeZone, { error: 'Enter a time zone such as Europe/London' }),
-  clock: clockSchema,
-});
+/** A site's way of writing dates and times (checked by `displayFormatSchema`). */
 export type DisplayFormat = z.infer<typeof displayFormatSchema>;
 
 /** Until a site says otherwise (common practice for clinical records: 24-hour clock). */

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import type { paediatricThresholdsShape } from './profile-schema.js';
 
 /*
  * Paediatric settings of a protocol profile: weight-based doses and energies, their caps, and
@@ -18,30 +18,10 @@ import { z } from 'zod';
  * - Shocks 2 J/kg, then 4 J/kg, later up to 10 J/kg or the adult dose (AHA 2020): from memory.
  * - ERC 2021 (Van de Voorde et al., Resuscitation 2021;161:327): 4 J/kg for every shock, up to
  *   8 J/kg and 360 J from the sixth — through a secondary summary only.
- * The ranges below are hard limits (a slip such as 1 mg/kg of epinephrine is refused); values
- * more than a factor of 2 away from the default also need a confirmation and a local reason
- * (see `profile-guard.ts`).
+ * The ranges (`paediatricThresholdsShape` in `profile-schema.ts`) are hard limits (a slip such
+ * as 1 mg/kg of epinephrine is refused); values more than a factor of 2 away from the default
+ * also need a confirmation and a local reason (see `profile-guard.ts`).
  */
-export const paediatricThresholdsShape = {
-  paediatricEpinephrineMgPerKg: z.number().min(0.001).max(0.1),
-  paediatricEpinephrineMaxMg: z.number().min(0.1).max(1),
-  paediatricAmiodaroneMgPerKg: z.number().min(1).max(15),
-  paediatricAmiodaroneMaxMg: z.number().min(50).max(300),
-  paediatricLidocaineMgPerKg: z.number().min(0.25).max(3),
-  paediatricBicarbonateMmolPerKg: z.number().min(0.25).max(2),
-  paediatricBicarbonateMaxMmol: z.number().min(10).max(100),
-  paediatricCalciumChlorideMlPerKg: z.number().min(0.05).max(0.5),
-  paediatricCalciumChlorideMaxMl: z.number().min(5).max(20),
-  paediatricMagnesiumMgPerKg: z.number().min(10).max(100),
-  paediatricMagnesiumMaxMg: z.number().min(500).max(2000),
-  paediatricFirstShockJPerKg: z.number().min(1).max(5),
-  paediatricLaterShockJPerKg: z.number().min(2).max(10),
-  paediatricShockMaxJPerKg: z.number().min(4).max(10),
-  paediatricShockMaxJ: z.number().min(100).max(360),
-  paediatricVentilationMaxPerMin: z.number().min(10).max(40),
-  infantVentilationMaxPerMin: z.number().min(10).max(40),
-};
-
 export type PaediatricKey = keyof typeof paediatricThresholdsShape;
 
 /** Guideline defaults for child and infant records (see the note above for their status). */

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { type PaediatricFieldGroup, paediatricFields } from './paediatric-profile.js';
-import { type Thresholds, thresholdsSchema } from './profile.js';
+import { type Thresholds, thresholdsSchema } from './profile-schema.js';
 
 export type ThresholdGroup =
   'etco2' | 'cpr' | 'rhythm' | 'drugs' | 'ventilation' | PaediatricFieldGroup;

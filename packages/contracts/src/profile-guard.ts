@@ -6,7 +6,8 @@ import {
   thresholdRange,
   thresholdsInputSchema,
 } from './profile-fields.js';
-import { type Thresholds, thresholdDefaults } from './profile.js';
+import { thresholdDefaults } from './profile.js';
+import type { Thresholds } from './profile-schema.js';
 
 /**
  * A value more than this factor away from the guideline default (above or below) is saved

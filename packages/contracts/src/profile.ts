@@ -1,44 +1,5 @@
-import { z } from 'zod';
-import { isoDateTimeSchema, uuidSchema } from './common.js';
-import {
-  paediatricDefaults,
-  paediatricSources,
-  paediatricThresholdsShape,
-} from './paediatric-profile.js';
-
-/**
- * Every threshold the analysis uses. Defaults are published guideline values (shared
- * REFERENCE.md); each one is a site setting because local protocols differ.
- */
-export const thresholdsSchema = z
-  .object({
-    lowEtco2MmHg: z.number().min(1).max(40),
-    lowEtco2MinSec: z.number().min(5).max(300),
-    targetEtco2MmHg: z.number().min(5).max(60),
-    riseMmHg: z.number().min(2).max(60),
-    riseBaselineSec: z.number().min(10).max(600),
-    riseSustainSec: z.number().min(5).max(600),
-    confounderWindowSec: z.number().min(0).max(1800),
-    prognosisAfterSec: z.number().min(60).max(7200),
-    prognosisEtco2MmHg: z.number().min(1).max(40),
-    pauseMaxSec: z.number().min(2).max(120),
-    preshockPauseMaxSec: z.number().min(2).max(120),
-    rhythmCheckIntervalSec: z.number().min(30).max(600),
-    rhythmCheckToleranceSec: z.number().min(0).max(300),
-    epinephrineMinSec: z.number().min(30).max(1200),
-    epinephrineMaxSec: z.number().min(30).max(1800),
-    ventilationMaxPerMin: z.number().min(4).max(40),
-    ventilationTolerancePerMin: z.number().min(0).max(20),
-    waveformAbsentSec: z.number().min(5).max(600),
-    rebreathingBaselineMmHg: z.number().min(0.5).max(20),
-    compressionFractionTarget: z.number().min(0).max(1),
-    ...paediatricThresholdsShape,
-  })
-  .refine((t) => t.epinephrineMinSec <= t.epinephrineMaxSec, {
-    path: ['epinephrineMaxSec'],
-    error: 'The longest epinephrine interval must not be shorter than the shortest',
-  });
-export type Thresholds = z.infer<typeof thresholdsSchema>;
+import type { Thresholds } from './profile-schema.js';
+import { paediatricDefaults, paediatricSources } from './paediatric-profile.js';
 
 /** Guideline defaults, each with its source (see shared REFERENCE.md for status). */
 export const thresholdDefaults: Thresholds = {
@@ -96,26 +57,3 @@ export const thresholdSources: Record<keyof Thresholds, string> = {
   compressionFractionTarget: `${meaney}: goal above 80 %`,
   ...paediatricSources,
 };
-
-/** A partial profile as the analysis input accepts it; missing values take the defaults. */
-export const profileInputSchema = z
-  .object(
-    Object.fromEntries(
-      Object.keys(thresholdDefaults).map((k) => [k, z.number().finite().optional()]),
-    ) as { [K in keyof Thresholds]: z.ZodOptional<z.ZodNumber> },
-  )
-  .strict();
-export type ProfileInput = z.infer<typeof profileInputSchema>;
-
-export const protocolProfileSchema = z.object({
-  id: uuidSchema,
-  siteId: uuidSchema,
-  version: z.number().int().positive(),
-  name: z.string().min(1).max(120),
-  thresholds: thresholdsSchema,
-  /** Local source or reason for each value saved far from its guideline default. */
-  localSources: z.record(z.string(), z.string()).optional(),
-  createdAt: isoDateTimeSchema,
-  createdBy: z.string().nullable(),
-});
-export type ProtocolProfile = z.infer<typeof protocolProfileSchema>;

@@ -1,8 +1,7 @@
 import { z } from 'zod';
-import { etco2DisplayUnitSchema } from './etco2-units.js';
+import { displayFormatSchema, etco2DisplayUnitSchema } from './display-settings.js';
 import { isoDateTimeSchema, uuidSchema } from './common.js';
-import { displayFormatSchema } from './formats.js';
-import { thresholdsSchema } from './profile.js';
+import { thresholdsSchema } from './profile-schema.js';
 
 /** Who was at the bedside and in which role (filled during or after the code). */
 export const rosterRoleSchema = z.enum(['lead', 'compressor', 'airway', 'drugs', 'recorder']);

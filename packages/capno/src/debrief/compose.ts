@@ -17,7 +17,7 @@ import {
 } from '@upstroke/contracts';
 import { analyze } from '../analyze.js';
 import { etco2Series, valuesBesideWaveform } from '../etco2/series.js';
-import { eventsInForce, supersededByMap, supersededIds } from '../events/normalize.js';
+import { eventsInForce, supersededByMap, supersededIds } from '../events/corrections.js';
 import { profileInForce } from './profile-in-force.js';
 import { runSpan } from '../waveform/runs.js';
 import { joinWaveform, type StoredRecord, waveformSource } from './stored-record.js';

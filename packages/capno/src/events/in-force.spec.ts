@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { eventsInForce, supersededByMap, supersededIds } from './normalize.js';
+import { eventsInForce, supersededByMap, supersededIds } from './corrections.js';
 
 const at = (sec: number) => new Date(Date.parse('2026-03-04T10:00:00Z') + sec * 1000).toISOString();
 const ev = (id: string, sec: number, kind: string, data: object = {}) => ({

@@ -1,5 +1,5 @@
 import type { Interval, PatientState, PatientStateInterval } from '@upstroke/contracts';
-import { eventsInForce, type CorrectableEvent } from './normalize.js';
+import { type CorrectableEvent, eventsInForce } from './corrections.js';
 
 /*
  * The patient's state during a record (PRODUCT.md "Patient state"):

@@ -1,12 +1,8 @@
-import {
-  type BatchResult,
-  batchResultSchema,
-  type DiscardRefused,
-  discardResultSchema,
-  type RecordingContext,
-  recordingContextSchema,
-} from '@upstroke/contracts';
+import type { BatchResult, DiscardRefused, RecordingContext } from '@upstroke/contracts';
 import { apiFetch, ApiRequestError } from '../api-client';
+
+/** The answers' schemas (and zod), fetched on first use: see `wire-schemas.ts`. */
+export const wireSchemas = () => import('./wire-schemas');
 
 export type BatchKind = 'events' | 'etco2' | 'waveform';
 
@@ -44,28 +40,29 @@ export function isPermanent(error: unknown): boolean {
 }
 
 export const apiTransport: SyncTransport = {
-  context: () => apiFetch('/context', { schema: recordingContextSchema }),
+  context: async () =>
+    apiFetch('/context', { schema: (await wireSchemas()).recordingContextSchema }),
   async create(body) {
     await apiFetch('/resuscitations', { method: 'POST', body });
   },
   async patch(id, body) {
     await apiFetch(`/resuscitations/${id}`, { method: 'PATCH', body });
   },
-  batch(id, kind, items, clockOffsetMs) {
+  async batch(id, kind, items, clockOffsetMs) {
     const headers: Record<string, string> =
       clockOffsetMs === undefined ? {} : { 'X-Clock-Offset-Ms': String(clockOffsetMs) };
     return apiFetch(`/resuscitations/${id}/${kind}/batch`, {
       method: 'POST',
       body: { [bodyKey[kind]]: items },
       headers,
-      schema: batchResultSchema,
+      schema: (await wireSchemas()).batchResultSchema,
     });
   },
   async discard(id, body) {
     await apiFetch(`/resuscitations/${id}/discards`, {
       method: 'POST',
       body,
-      schema: discardResultSchema,
+      schema: (await wireSchemas()).discardResultSchema,
     });
   },
 };

@@ -1,12 +1,11 @@
 import { useQuery, useQueryClient } from '@tanstack/react-query';
-import { recordEntriesSchema } from '@upstroke/contracts';
 import { useEffect, useRef, useState, useSyncExternalStore } from 'react';
 import { apiFetch } from '../api-client';
 import { authStore } from '../auth-store';
 import { offlineDb } from './db';
 import { syncEngine } from './engine-instance';
-import { openLiveFeed } from './live-feed';
 import { mergeRemoteEntries } from './pull';
+import { wireSchemas } from './transport';
 
 /**
  * How often Live asks the server for other tablets' entries while it is open and online and
@@ -44,7 +43,7 @@ export function useRemoteEntries(
       const from = since.current?.id === resuscitationId ? since.current.at : null;
       const query = from ? `?since=${encodeURIComponent(from)}` : '';
       const answer = await apiFetch(`/resuscitations/${resuscitationId}/entries${query}`, {
-        schema: recordEntriesSchema,
+        schema: (await wireSchemas()).recordEntriesSchema,
       });
       const known = new Set(heldNow.current.flatMap((rows) => rows.map((r) => r.id)));
       const added = await mergeRemoteEntries(offlineDb, resuscitationId, answer, known);
@@ -69,18 +68,25 @@ function useLiveFeed(resuscitationId: string, enabled: boolean): boolean {
   const [live, setLive] = useState(false);
   useEffect(() => {
     if (!enabled) return;
-    const close = openLiveFeed(resuscitationId, () => authStore.get()?.accessToken ?? null, {
-      onEntries: (entries) => void mergeRemoteEntries(offlineDb, resuscitationId, entries),
-      onLive: (up) => {
-        setLive(up);
-        if (up)
-          void client.invalidateQueries({
-            queryKey: ['resuscitations', resuscitationId, 'other-tablets'],
-          });
-      },
+    let close: (() => void) | undefined;
+    let stopped = false;
+    // The feed and its message schema (zod) load after Live's first draw.
+    void import('./live-feed').then(({ openLiveFeed }) => {
+      if (stopped) return;
+      close = openLiveFeed(resuscitationId, () => authStore.get()?.accessToken ?? null, {
+        onEntries: (entries) => void mergeRemoteEntries(offlineDb, resuscitationId, entries),
+        onLive: (up) => {
+          setLive(up);
+          if (up)
+            void client.invalidateQueries({
+              queryKey: ['resuscitations', resuscitationId, 'other-tablets'],
+            });
+        },
+      });
     });
     return () => {
-      close();
+      stopped = true;
+      close?.();
       setLive(false);
     };
   }, [resuscitationId, enabled, client]);

@@ -1,14 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
-import {
-  type Resuscitation,
-  resuscitationSchema,
-  type Thresholds,
-  thresholdDefaults,
-} from '@upstroke/contracts';
+import { type Resuscitation, type Thresholds, thresholdDefaults } from '@upstroke/contracts';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { useEffect, useMemo } from 'react';
 import { apiFetch } from '../../../lib/api-client';
-import { offlineDb, type SyncAck, useRemoteEntries } from '../../../lib/offline';
+import { offlineDb, type SyncAck, useRemoteEntries, wireSchemas } from '../../../lib/offline';
 
 /**
  * The record, its events and EtCO2 values as this tablet holds them (IndexedDB first). A
@@ -37,7 +32,8 @@ export function useLiveRecord(id: string) {
   const acks = useMemo(() => new Map<string, SyncAck>(answers.map((a) => [a.id, a])), [answers]);
   const remote = useQuery({
     queryKey: ['resuscitations', id, 'summary'],
-    queryFn: () => apiFetch(`/resuscitations/${id}`, { schema: resuscitationSchema }),
+    queryFn: async () =>
+      apiFetch(`/resuscitations/${id}`, { schema: (await wireSchemas()).resuscitationSchema }),
     enabled: record === undefined,
   });
   useEffect(() => {
