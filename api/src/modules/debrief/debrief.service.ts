@@ -6,10 +6,13 @@ import { ClinicalRecordsService } from '../resuscitations/clinical-records.servi
 import { ResuscitationAccess } from '../resuscitations/resuscitation-access.service';
 import type { ResuscitationRow } from '../resuscitations/clinical-records.service';
 import { toResuscitation } from '../resuscitations/resuscitations.service';
-import { WorkPool } from '../work-pool/work-pool.service';
+import { type ComposeInput, type ReportOptions, WorkPool } from '../work-pool/work-pool.service';
 import { DebriefRepository } from './debrief.repository';
 
-/** Loads the stored record (one loader) and its header; capno composes the debrief (in a worker). */
+/**
+ * Loads the stored record (one loader), its header and the recorders' names; capno composes
+ * the debrief in a worker (its analysis of a long record takes 100 ms and more).
+ */
 @Injectable()
 export class DebriefService {
   constructor(
@@ -20,7 +23,8 @@ export class DebriefService {
   ) {}
 
   async forUser(user: AuthUser, id: string): Promise<Debrief> {
-    return (await this.build(await this.access.readable(user, id))).debrief;
+    const input = await this.input(await this.access.readable(user, id));
+    return this.pool.run('debrief', ...input);
   }
 
   /** The debrief and the capnogram's runs (the FHIR export carries them whole). */
@@ -28,10 +32,24 @@ export class DebriefService {
     user: AuthUser,
     id: string,
   ): Promise<{ debrief: Debrief; waveform: Waveform[] }> {
-    return this.build(await this.access.readable(user, id));
+    return this.pool.run('compose', ...(await this.input(await this.access.readable(user, id))));
   }
 
-  async build(record: ResuscitationRow): Promise<{ debrief: Debrief; waveform: Waveform[] }> {
+  /** The PDF report, composed and rendered in one worker task; the record names the file. */
+  async report(
+    user: AuthUser,
+    id: string,
+    opts: ReportOptions,
+  ): Promise<{ file: Buffer; record: ComposeInput[1]['record'] }> {
+    const input = await this.input(await this.access.readable(user, id));
+    const bytes = await this.pool.run('recordReport', ...input, opts);
+    return {
+      file: Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength),
+      record: input[1].record,
+    };
+  }
+
+  private async input(record: ResuscitationRow): Promise<ComposeInput> {
     const [stored, context, amendments] = await Promise.all([
       this.data.loadStored(record.id),
       this.repo.context(record),
@@ -39,17 +57,17 @@ export class DebriefService {
     ]);
     if (!stored) throw notFound('Resuscitation');
     const { profileId: _profileId, ...header } = toResuscitation(record);
-    // capno's analysis of a long record takes 100 ms and more: off the event loop.
-    const composed = await this.pool.run('compose', stored, {
-      record: { ...header, ...context },
-      amendments: amendments.map((a) => ({ ...a, createdAt: a.createdAt.toISOString() })),
-      computedBy: 'server',
-    });
     const names = await this.repo.userNames([
       ...new Set(stored.events.map((e) => e.recordedBy ?? null)),
     ]);
-    for (const e of composed.debrief.events)
-      e.recordedByName = e.recordedBy ? (names.get(e.recordedBy) ?? null) : null;
-    return composed;
+    return [
+      stored,
+      {
+        record: { ...header, ...context },
+        amendments: amendments.map((a) => ({ ...a, createdAt: a.createdAt.toISOString() })),
+        computedBy: 'server',
+      },
+      [...names],
+    ];
   }
 }

@@ -5,7 +5,7 @@ import { forbidden } from '../../common/errors';
 import { APP_CONFIG, type AppConfig } from '../../config';
 import { AuditService } from '../audit/audit.service';
 import { DebriefService } from '../debrief/debrief.service';
-import { WorkPool } from '../work-pool/work-pool.service';
+import { type ReportOptions, WorkPool } from '../work-pool/work-pool.service';
 import { type FhirBundle, toFhirBundle } from './fhir/fhir-bundle';
 import { appVersion } from './version';
 
@@ -23,26 +23,27 @@ export class ExportsService {
     private readonly pool: WorkPool,
   ) {}
 
-  private async load(user: AuthUser, id: string): Promise<Debrief> {
+  private mayExport(user: AuthUser): void {
     if (user.role !== 'lead' && user.role !== 'quality')
       throw forbidden('Only leads and the quality committee export records');
-    return this.debrief.forUser(user, id);
   }
 
+  /** Composed and rendered in one worker task: only the file comes back to the event loop. */
   async pdf(user: AuthUser, id: string): Promise<{ file: Buffer; name: string }> {
-    const d = await this.load(user, id);
-    const file = await this.pdfOf(d);
-    const name = fileName(d, 'pdf');
+    this.mayExport(user);
+    const { file, record } = await this.debrief.report(user, id, this.reportOptions());
+    const name = fileName({ record }, 'pdf');
     await this.audit.exported(user.id, 'pdf', { resuscitationId: id }, { file: name });
     return { file, name };
   }
 
+  private reportOptions(): ReportOptions {
+    return { version: appVersion(), generatedAt: new Date() };
+  }
+
   /** Renders an already loaded debrief (also used to attach it to e-mail), in a worker. */
   async pdfOf(d: Debrief): Promise<Buffer> {
-    const bytes = await this.pool.run('report', d, {
-      version: appVersion(),
-      generatedAt: new Date(),
-    });
+    const bytes = await this.pool.run('report', d, this.reportOptions());
     return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   }
 
@@ -56,8 +57,7 @@ export class ExportsService {
   }
 
   async fhir(user: AuthUser, id: string): Promise<FhirBundle> {
-    if (user.role !== 'lead' && user.role !== 'quality')
-      throw forbidden('Only leads and the quality committee export records');
+    this.mayExport(user);
     const { debrief, waveform } = await this.debrief.withWaveform(user, id);
     const bundle = toFhirBundle(debrief, { publicUrl: this.config.publicUrl, waveform });
     await this.audit.exported(
@@ -70,7 +70,10 @@ export class ExportsService {
   }
 }
 
-export function fileName(d: Debrief, ext: string): string {
+export function fileName(
+  d: { record: Pick<Debrief['record'], 'arrestAt' | 'id'> },
+  ext: string,
+): string {
   const date = d.record.arrestAt.slice(0, 10);
   return `resuscitation-${date}-${d.record.id.slice(0, 8)}.${ext}`;
 }

@@ -1,3 +1,4 @@
+import { endianness } from 'node:os';
 import type { StoredProfile, StoredRecord } from '@upstroke/capno';
 import type { AgeGroup, Co2Unit, Resuscitation, Rhythm } from '@upstroke/contracts';
 
@@ -43,9 +44,15 @@ export interface StoredChunkRow {
   samples: Buffer;
 }
 
-/** Little-endian float32, as the sync and the imports store raw capnogram chunks. */
+const littleEndian = endianness() === 'LE';
+
+/**
+ * Little-endian float32, as the sync and the imports store raw capnogram chunks. On a
+ * little-endian host (every one we run on) the bytes are the array: one copy, no loop.
+ */
 export function decodeSamples(buf: Buffer, count: number): Float32Array {
   const n = Math.min(count, Math.floor(buf.length / 4));
+  if (littleEndian) return new Float32Array(Uint8Array.prototype.slice.call(buf, 0, n * 4).buffer);
   const out = new Float32Array(n);
   for (let i = 0; i < n; i++) out[i] = buf.readFloatLE(i * 4);
   return out;

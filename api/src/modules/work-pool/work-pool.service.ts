@@ -5,6 +5,10 @@ import { Piscina } from 'piscina';
 import { APP_CONFIG, type AppConfig } from '../../config';
 import type { TaskMessage, TaskName, Tasks } from './work-pool.tasks';
 
+export type { ReportOptions } from '../exports/pdf/report-pdf';
+/** What every debrief task takes: the stored record, its header and the recorders' names. */
+export type ComposeInput = Parameters<Tasks['compose']>;
+
 /**
  * The worker file: compiled JavaScript in the built app; from sources (tests, tsx) a small
  * CommonJS entry that compiles the TypeScript on load, with the workspace packages read
