@@ -15,6 +15,12 @@ function lastMonthBeforeImprovement(today = new Date()): string {
   return d.toISOString().slice(0, 7);
 }
 
+/** "Jun 2026" from "2026-06": the demo site writes months in en-GB (db/seeds). */
+const monthName = (month: string) =>
+  new Intl.DateTimeFormat('en-GB', { month: 'short', year: 'numeric', timeZone: 'UTC' }).format(
+    new Date(`${month}-01T00:00:00Z`),
+  );
+
 async function apiFunnel(): Promise<FunnelResponse> {
   const login = await fetch(`${baseUrl}/api/auth/login`, {
     method: 'POST',
@@ -63,13 +69,18 @@ describe('quality committee: control charts and the funnel plot', () => {
     const toggle = page.getByRole('group', { name: 'Median compression fraction: how to show it' });
     await toggle.getByRole('button', { name: 'Control chart' }).click();
     await page.getByRole('combobox', { name: 'Baseline to' }).click();
-    await page.getByRole('option', { name: lastMonthBeforeImprovement(), exact: true }).click();
+    await page
+      .getByRole('option', { name: monthName(lastMonthBeforeImprovement()), exact: true })
+      .click();
     const signals = page.getByRole('list', { name: 'Signals' });
     const first = signals.getByRole('listitem').first();
     await first.waitFor();
     assert.match(await first.innerText(), /above the upper control limit/);
-    const month = (await first.locator('strong').innerText()).trim();
+    // The month is written in words; its key ("2026-06") rides along for comparing.
+    const strong = first.locator('strong');
+    const month = (await strong.getAttribute('data-month')) ?? '';
     assert.ok(month > lastMonthBeforeImprovement(), 'the signal comes after the baseline');
+    assert.equal((await strong.innerText()).trim(), monthName(month));
     assert.match(
       await page
         .getByText(/Nelson 1984/)
@@ -79,9 +90,11 @@ describe('quality committee: control charts and the funnel plot', () => {
     );
 
     await page.getByRole('button', { name: 'Points and their records' }).click();
-    await page.getByRole('button', { name: `Records behind ${month}` }).click();
+    await page.getByRole('button', { name: `Records behind ${monthName(month)}` }).click();
     const dialog = page.getByRole('dialog');
-    await dialog.getByRole('heading', { name: new RegExp(`Records behind ${month}`) }).waitFor();
+    await dialog
+      .getByRole('heading', { name: new RegExp(`Records behind ${monthName(month)}`) })
+      .waitFor();
     const links = dialog.getByRole('link');
     await links.first().waitFor();
     assert.ok((await links.count()) >= 1);

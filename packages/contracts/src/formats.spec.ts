@@ -4,6 +4,7 @@ import {
   defaultDisplayFormat,
   formatDate,
   formatDateTime,
+  formatMonth,
   formatPercent,
   formatTime,
   roundTo,
@@ -27,6 +28,14 @@ describe('display formats', () => {
     const ny = { locale: 'en-US', timeZone: 'America/New_York', clock: '12h' as const };
     expect(formatTime(july, ny)).toMatch(/^08:05\s?AM$/i);
     expect(formatDateTime(july, { ...ny, clock: '24h' })).toBe('Jul 1, 2026, 08:05');
+  });
+
+  it('names a month in the site language, whatever its time zone', () => {
+    expect(formatMonth('2026-03', defaultDisplayFormat)).toBe('Mar 2026');
+    const auckland = { ...defaultDisplayFormat, timeZone: 'Pacific/Auckland' };
+    expect(formatMonth('2026-12', auckland)).toBe('Dec 2026');
+    expect(formatMonth('2026-03', { ...defaultDisplayFormat, locale: 'fr-FR' })).toBe('mars 2026');
+    expect(formatMonth('not a month', defaultDisplayFormat)).toBe('not a month');
   });
 
   it('never shows midnight as 24:00 on the 24-hour clock', () => {

@@ -63,6 +63,20 @@ export function timeZoneName(iso: string, fmt: DisplayFormat): string {
   return part?.value ?? fmt.timeZone;
 }
 
+/**
+ * A calendar month ("2026-03", as trends and control charts key them) in the site's language:
+ * "Mar 2026" in en-GB. Anything that is not such a month is returned as it is.
+ */
+export function formatMonth(month: string, fmt: DisplayFormat): string {
+  const m = /^(\d{4})-(\d{2})$/.exec(month);
+  if (!m) return month;
+  return new Intl.DateTimeFormat(fmt.locale, {
+    month: 'short',
+    year: 'numeric',
+    timeZone: 'UTC',
+  }).format(Date.UTC(Number(m[1]), Number(m[2]) - 1, 1));
+}
+
 /** A share as "92 %" everywhere (screens, PDF, e-mail); "—" when there is none. */
 export function formatPercent(fraction: number | null | undefined, digits = 0): string {
   if (fraction === null || fraction === undefined || !Number.isFinite(fraction)) return '—';

@@ -3,6 +3,7 @@ import {
   type DisplayFormat,
   formatDate,
   formatDateTime,
+  formatMonth,
   formatTime,
 } from '@upstroke/contracts';
 import { useLiveQuery } from 'dexie-react-hooks';
@@ -14,6 +15,8 @@ export interface Formatter {
   dateTime: (iso: string | null | undefined) => string;
   date: (iso: string | null | undefined) => string;
   time: (iso: string | null | undefined, seconds?: boolean) => string;
+  /** "Mar 2026" from "2026-03". */
+  month: (month: string) => string;
 }
 
 export function formatterFor(display: DisplayFormat): Formatter {
@@ -22,6 +25,7 @@ export function formatterFor(display: DisplayFormat): Formatter {
     dateTime: (iso) => formatDateTime(iso, display),
     date: (iso) => formatDate(iso, display),
     time: (iso, seconds) => formatTime(iso, display, seconds),
+    month: (month) => formatMonth(month, display),
   };
 }
 

@@ -12,6 +12,7 @@ import {
 import annotationPlugin from 'chartjs-plugin-annotation';
 import { useState } from 'react';
 import { Line } from 'react-chartjs-2';
+import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { type ChartView, ChartViewToggle } from './spc/chart-view-toggle';
 import { ControlChartView } from './spc/control-chart-view';
 
@@ -52,12 +53,15 @@ export function TrendChart({
 }: ChartSpec & { filter?: TrendsFilter }) {
   const [view, setView] = useState<ChartView>('line');
   const control = view === 'control' && Boolean(spc?.length);
-  const labels = points.map((p) => `${p.month} (n=${p.n})`);
+  const { month } = useDisplayFormat(filter.siteId);
+  const labels = points.map((p) => `${month(p.month)} (n=${p.n})`);
   const values = points.map((p) =>
     p.value === null || p.n === 0 ? null : Math.round(p.value * scale * 10) / 10,
   );
   const summary = points
-    .flatMap((p, i) => (values[i] === null ? [] : [`${p.month}: ${values[i]} ${unit} (n=${p.n})`]))
+    .flatMap((p, i) =>
+      values[i] === null ? [] : [`${month(p.month)}: ${values[i]} ${unit} (n=${p.n})`],
+    )
     .join('; ');
   return (
     <Card variant="outlined">

@@ -9,8 +9,11 @@ export function BaselineFields({
   months,
   value,
   onChange,
+  monthName,
 }: {
   months: string[];
+  /** A month in the site's words ("Mar 2026"); the value stays "2026-03". */
+  monthName: (month: string) => string;
   value: BaselineMonths;
   onChange: (b: BaselineMonths) => void;
 }) {
@@ -26,7 +29,7 @@ export function BaselineFields({
       <MenuItem value="">{key === 'baselineFrom' ? 'First month' : 'Last month'}</MenuItem>
       {allowed.map((m) => (
         <MenuItem key={m} value={m}>
-          {m}
+          {monthName(m)}
         </MenuItem>
       ))}
     </TextField>

@@ -26,10 +26,12 @@ export function ControlChartCanvas({
   chart,
   title,
   onPoint,
+  monthName,
 }: {
   chart: ControlChartResponse;
   title: string;
   onPoint: (index: number) => void;
+  monthName: (month: string) => string;
 }) {
   const m = chart.measure;
   const pts = chart.points;
@@ -37,7 +39,10 @@ export function ControlChartCanvas({
   const centre = chartValue(m, chart.centre);
   const summary = pts
     .filter((p) => p.value !== null)
-    .map((p) => `${p.month}: ${formatSpcValue(m, p.value)} (n=${p.n})${p.signal ? ', signal' : ''}`)
+    .map(
+      (p) =>
+        `${monthName(p.month)}: ${formatSpcValue(m, p.value)} (n=${p.n})${p.signal ? ', signal' : ''}`,
+    )
     .join('; ');
   const limit = (label: string, data: (number | null)[]) => ({
     label,
@@ -56,7 +61,7 @@ export function ControlChartCanvas({
     >
       <Line
         data={{
-          labels: pts.map((p) => `${p.month} (n=${p.n})`),
+          labels: pts.map((p) => `${monthName(p.month)} (n=${p.n})`),
           datasets: [
             {
               label: title,

@@ -2,6 +2,7 @@ import { MenuItem, TextField } from '@mui/material';
 import { type SpcMeasure, spcMeasureLabels, type TrendsFilter } from '@upstroke/contracts';
 import { useState } from 'react';
 import { ErrorState, Loading } from '../../../../components/ui/states';
+import { useDisplayFormat } from '../../../../hooks/use-display-format';
 import { type BaselineMonths, useControlChart } from '../../api/get-control-chart';
 import { BaselineFields } from './baseline-fields';
 import { ControlChartCanvas } from './control-chart-canvas';
@@ -25,9 +26,10 @@ export function ControlChartView({
   const [point, setPoint] = useState<PointSelection | null>(null);
   const chart = useControlChart(filter, measure, baseline);
   const title = spcMeasureLabels[measure];
+  const { month } = useDisplayFormat(filter.siteId);
   const open = (i: number) => {
     const p = chart.data?.points[i];
-    if (p && p.n > 0) setPoint({ label: `${p.month} (${title})`, records: p.records });
+    if (p && p.n > 0) setPoint({ label: `${month(p.month)} (${title})`, records: p.records });
   };
   return (
     <>
@@ -63,10 +65,11 @@ export function ControlChartView({
             months={chart.data.points.map((p) => p.month)}
             value={baseline}
             onChange={setBaseline}
+            monthName={month}
           />
-          <ControlChartCanvas chart={chart.data} title={title} onPoint={open} />
-          <SignalsList chart={chart.data} />
-          <ControlPointsTable chart={chart.data} title={title} onPoint={open} />
+          <ControlChartCanvas chart={chart.data} title={title} onPoint={open} monthName={month} />
+          <SignalsList chart={chart.data} monthName={month} />
+          <ControlPointsTable chart={chart.data} title={title} onPoint={open} monthName={month} />
         </>
       )}
       <PointRecordsDialog point={point} onClose={() => setPoint(null)} />

@@ -18,10 +18,12 @@ export function ControlPointsTable({
   chart,
   title,
   onPoint,
+  monthName,
 }: {
   chart: ControlChartResponse;
   title: string;
   onPoint: (index: number) => void;
+  monthName: (month: string) => string;
 }) {
   const m = chart.measure;
   return (
@@ -44,7 +46,7 @@ export function ControlPointsTable({
           <TableBody>
             {chart.points.map((p, i) => (
               <TableRow key={p.month} selected={p.signal}>
-                <TableCell>{p.month}</TableCell>
+                <TableCell>{monthName(p.month)}</TableCell>
                 <TableCell>
                   {p.value === null ? 'no records' : formatSpcValue(m, p.value)}
                 </TableCell>
@@ -60,7 +62,7 @@ export function ControlPointsTable({
                     size="small"
                     disabled={p.n === 0}
                     onClick={() => onPoint(i)}
-                    aria-label={`Records behind ${p.month}`}
+                    aria-label={`Records behind ${monthName(p.month)}`}
                   >
                     Open
                   </Button>

@@ -3,7 +3,13 @@ import type { ControlChartResponse } from '@upstroke/contracts';
 import { ClinicalCaution } from '../../../../components/ui/clinical-caution';
 
 /** Each signal in plain words, then the rule set and where it comes from. */
-export function SignalsList({ chart }: { chart: ControlChartResponse }) {
+export function SignalsList({
+  chart,
+  monthName,
+}: {
+  chart: ControlChartResponse;
+  monthName: (month: string) => string;
+}) {
   const withData = chart.points.some((p) => p.value !== null);
   return (
     <Stack spacing={1} sx={{ mt: 1 }}>
@@ -23,7 +29,7 @@ export function SignalsList({ chart }: { chart: ControlChartResponse }) {
           {chart.signals.map((s) => (
             <li key={`${s.rule}-${s.month}`}>
               <Alert severity="info" variant="outlined" role="note">
-                <strong>{s.month}</strong>: {s.explanation}
+                <strong data-month={s.month}>{monthName(s.month)}</strong>: {s.explanation}
               </Alert>
             </li>
           ))}
@@ -31,7 +37,9 @@ export function SignalsList({ chart }: { chart: ControlChartResponse }) {
       )}
       <Typography variant="caption" color="text.secondary">
         Rules: {chart.rules.names.join('; ')}. {chart.rules.source}
-        {chart.baseline ? ` Baseline ${chart.baseline.from} to ${chart.baseline.to}.` : ''}
+        {chart.baseline
+          ? ` Baseline ${monthName(chart.baseline.from)} to ${monthName(chart.baseline.to)}.`
+          : ''}
         {chart.target !== null ? ` Target ${Math.round(chart.target * 100)} %.` : ''}
       </Typography>
       <ClinicalCaution dense />
