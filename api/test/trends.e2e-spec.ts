@@ -140,7 +140,7 @@ describe('trends: figures, scope and exports', () => {
     const lines = res.text.trim().split('\r\n');
     const table = parse(res.text, { relaxColumnCount: false }) as string[][];
     const header = table[0];
-    expect(header.slice(0, 4)).toEqual(['Record id', 'Site', 'Unit', 'Arrest time (UTC)']);
+    expect(header.slice(0, 4)).toEqual(['Record id', 'Site', 'Unit', 'Arrest time (ISO 8601 UTC)']);
     expect(header).toContain('Findings: Low EtCO2 (count)');
     expect(header.join(',')).not.toMatch(/_|etco2-low|\bsec\b/);
     expect(lines).toHaveLength(rows.length + 1);
@@ -170,7 +170,7 @@ describe('trends: figures, scope and exports', () => {
       .get('/api/trends/utstein.csv?from=2026-01-01')
       .set(...(await as('admin')));
     expect(u.text.split('\r\n')[0]).toBe(
-      'Element,Count,Of (treated arrests),Share (%),Period from,Period to (not included)',
+      'Element,Count,Of (treated arrests),Share (%),Period from (ISO 8601),Period to (ISO 8601; not included)',
     );
     expect(u.text).toContain(`Treated arrests,${rows.length},${rows.length},100,2026-01-01,`);
   });

@@ -42,7 +42,7 @@ const baseColumns: [string, (r: Row) => unknown][] = [
   ['Record id', (r) => r.resuscitationId],
   ['Site', (r) => r.siteName],
   ['Unit', (r) => r.unitName],
-  ['Arrest time (UTC)', (r) => r.arrestAt],
+  ['Arrest time (ISO 8601 UTC)', (r) => r.arrestAt],
   ['Age group', (r) => word(ageGroupLabels)(r.ageGroup)],
   ['Witnessed', (r) => yesNoOf(r.witnessed)],
   ['Monitored', (r) => yesNoOf(r.monitored)],
@@ -81,7 +81,7 @@ export const recordCsvLine = (row: Record<string, unknown>) =>
 
 /** The Utstein summary as CSV: one line per element, then the medians. */
 export function utsteinCsv(s: UtsteinSummary): string {
-  const period = ['Period from', 'Period to (not included)'];
+  const period = ['Period from (ISO 8601)', 'Period to (ISO 8601; not included)'];
   let out = csvLine(['Element', 'Count', 'Of (treated arrests)', 'Share (%)', ...period]);
   for (const l of s.lines)
     out += csvLine([l.label, l.count, l.denominator, l.percent, s.from, s.to]);
