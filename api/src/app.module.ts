@@ -1,13 +1,16 @@
 import { type DynamicModule, Module, RequestMethod } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { ScheduleModule } from '@nestjs/schedule';
 import { LoggerModule } from 'nestjs-pino';
 import { JwtAuthGuard, RolesGuard } from './common/auth.guards';
+import { CLOCK, systemClock } from './common/clock';
 import { ErrorFilter } from './common/error.filter';
 import { APP_CONFIG, type AppConfig } from './config';
 import { DatabaseModule } from './db/database.module';
 import { AuditModule } from './modules/audit/audit.module';
 import { AuditLogModule } from './modules/audit-log/audit-log.module';
 import { AuthModule } from './modules/auth/auth.module';
+import { CommitteeReportModule } from './modules/committee-report/committee-report.module';
 import { DebriefModule } from './modules/debrief/debrief.module';
 import { DebriefMailModule } from './modules/debrief-mail/debrief-mail.module';
 import { ExportsModule } from './modules/exports/exports.module';
@@ -47,6 +50,7 @@ export class AppModule {
             },
           },
         }),
+        ScheduleModule.forRoot(),
         DatabaseModule,
         WorkPoolModule,
         AuditModule,
@@ -60,6 +64,7 @@ export class AppModule {
         DebriefMailModule,
         SummariesModule,
         TrendsModule,
+        CommitteeReportModule,
         ReviewsModule,
         SiteContextModule,
         MailModule,
@@ -70,11 +75,12 @@ export class AppModule {
       ],
       providers: [
         { provide: APP_CONFIG, useValue: config },
+        { provide: CLOCK, useValue: { ...systemClock } },
         { provide: APP_GUARD, useClass: JwtAuthGuard },
         { provide: APP_GUARD, useClass: RolesGuard },
         { provide: APP_FILTER, useClass: ErrorFilter },
       ],
-      exports: [APP_CONFIG],
+      exports: [APP_CONFIG, CLOCK],
     };
   }
 }

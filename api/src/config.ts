@@ -25,6 +25,11 @@ export interface AppConfig {
   workerThreads: number;
   /** How often the outbox worker retries queued mail; 0 = never (tests call it directly). */
   mailRetryIntervalMs: number;
+  /**
+   * When the monthly committee report goes out (cron, UTC), for the month before; null when
+   * the schedule is off (`COMMITTEE_REPORT_SCHEDULE=off`, and under tests unless set).
+   */
+  committeeReportCron: string | null;
 }
 
 export const APP_CONFIG = Symbol('APP_CONFIG');
@@ -56,5 +61,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
       env.WORKER_THREADS ?? Math.min(4, Math.max(1, os.availableParallelism() - 1)),
     ),
     mailRetryIntervalMs: test ? 0 : Number(env.MAIL_RETRY_INTERVAL_MS ?? 30_000),
+    committeeReportCron:
+      env.COMMITTEE_REPORT_SCHEDULE === 'off' || (test && !env.COMMITTEE_REPORT_CRON)
+        ? null
+        : (env.COMMITTEE_REPORT_CRON ?? '0 6 1 * *'),
   };
 }

@@ -43,7 +43,11 @@ export class CommitteeReportService {
   }
 
   async pdf(user: AuthUser, q: CommitteeReportQuery, generatedAt: Date): Promise<Buffer> {
-    return this.exportsService.committeeReportPdf(await this.gather(user, q), generatedAt);
+    return this.render(await this.gather(user, q), generatedAt);
+  }
+
+  render(data: CommitteeReportData, generatedAt: Date): Promise<Buffer> {
+    return this.exportsService.committeeReportPdf(data, generatedAt);
   }
 
   async gather(user: AuthUser, q: CommitteeReportQuery): Promise<CommitteeReportData> {

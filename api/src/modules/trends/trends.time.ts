@@ -36,8 +36,3 @@ export function addMonths(month: string, n: number): string {
   const i = y * 12 + (m - 1) + n;
   return `${Math.floor(i / 12)}-${String((i % 12) + 1).padStart(2, '0')}`;
 }
-
-/** The calendar month (UTC) before the one holding `now`: the month a report on the 1st covers. */
-export function previousMonth(now: Date): string {
-  return addMonths(now.toISOString().slice(0, 7), -1);
-}
