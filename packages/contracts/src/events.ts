@@ -112,6 +112,24 @@ export type ResusEvent = AnyEventOf<{
  */
 export const eventSchema = unionOf(baseFields) as z.ZodType<ResusEvent>;
 
+/**
+ * Why a correction's replacement cannot stand, or null: its kind is not a recordable event
+ * (or is a correction itself), or its data is not valid for that kind (a dose outside the
+ * drug's plausible range, an unknown route…). Checked by the API on sync and on amendment.
+ */
+export function replacementProblem(e: { kind: string; data: unknown }): string | null {
+  if (e.kind !== 'correction') return null;
+  const r = (e.data as { replacement?: { kind: string; data: unknown } }).replacement;
+  if (!r) return null;
+  if (r.kind === 'correction' || !Object.hasOwn(eventDataSchemas, r.kind))
+    return 'data.replacement.kind: not an event kind that can be recorded';
+  const parsed = eventDataSchemas[r.kind as EventKind].safeParse(r.data);
+  if (parsed.success) return null;
+  const issue = parsed.error.issues[0];
+  const path = ['data', 'replacement', 'data', ...issue.path.map(String)].join('.');
+  return `${path}: ${issue.message}`;
+}
+
 /** An event as the analysis reads it (CONTRACT.md "Analysis on files"): id, time, kind, data. */
 export const analysisEventSchema = unionOf({ id: z.string().min(1), at: isoDateTimeSchema });
 export type AnalysisEvent = AnyEventOf<{ id: string; at: string }>;

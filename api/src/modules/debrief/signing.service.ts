@@ -3,7 +3,9 @@ import { Injectable } from '@nestjs/common';
 import {
   type Amendment,
   type CreateAmendment,
+  entryTimeProblem,
   eventSchema,
+  replacementProblem,
   type Resuscitation,
   type ResusEvent,
 } from '@upstroke/contracts';
@@ -91,7 +93,7 @@ export class SigningService {
     const record = await this.leadRecord(user, id);
     if (record.status !== 'signed')
       throw conflict('This record is not signed yet: edit it directly instead of amending');
-    const events = this.validEvents(id, body.events ?? []);
+    const events = this.validEvents(record, body.events ?? []);
     const fields = body.fields ?? {};
     if (fields.unitId && !(await this.records.unitBelongsToSite(fields.unitId, record.siteId)))
       throw badRequest('fields.unitId: this unit is not part of the site', [
@@ -127,14 +129,32 @@ export class SigningService {
     return { ...stored, createdAt: stored.createdAt.toISOString() };
   }
 
-  /** Each added event must pass the same schema as a recorded one; all or nothing. */
-  private validEvents(id: string, events: NonNullable<CreateAmendment['events']>): ResusEvent[] {
+  /**
+   * Each added event must pass the same schema as a recorded one; a correction's replacement
+   * must be valid for its kind and fall within the record's plausible window (arrest − 1 h to
+   * arrest + 24 h). All or nothing.
+   */
+  private validEvents(
+    record: ResuscitationRow,
+    events: NonNullable<CreateAmendment['events']>,
+  ): ResusEvent[] {
     return events.map((raw, i) => {
-      const parsed = eventSchema.safeParse({ ...raw, resuscitationId: id });
-      if (parsed.success) return parsed.data;
-      const issue = parsed.error.issues[0];
-      const path = `events.${i}.${issue.path.map(String).join('.')}`;
-      throw badRequest(`${path}: ${issue.message}`, [{ path, message: issue.message }]);
+      const refuse = (path: string, message: string) =>
+        badRequest(`${path}: ${message}`, [{ path, message }]);
+      const parsed = eventSchema.safeParse({ ...raw, resuscitationId: record.id });
+      if (!parsed.success) {
+        const issue = parsed.error.issues[0];
+        throw refuse(`events.${i}.${issue.path.map(String).join('.')}`, issue.message);
+      }
+      const unfit = replacementProblem(parsed.data);
+      if (unfit) {
+        const [path, message] = unfit.split(/: (.*)/s);
+        throw refuse(`events.${i}.${path}`, message);
+      }
+      const at = (parsed.data.data as { replacement?: { at: string } }).replacement?.at;
+      const late = at ? entryTimeProblem(at, record.arrestAt) : null;
+      if (late) throw refuse(`events.${i}.data.replacement.at`, late);
+      return parsed.data;
     });
   }
 

@@ -4,6 +4,7 @@ import {
   etco2SampleSchema,
   eventSchema,
   jsonProblem,
+  replacementProblem,
   PLAUSIBLE,
   waveformChunkSchema,
 } from '@upstroke/contracts';
@@ -48,6 +49,8 @@ export function eventRow(raw: unknown, c: RowContext): RowResult<ResusEvent> {
     return { error: 'resuscitationId: does not match the record in the address' };
   const late = timeError('at', e.at, c);
   if (late) return late;
+  const unfit = replacementProblem(e);
+  if (unfit) return { error: unfit };
   const { replacement } = e.data as { replacement?: { at: string } };
   const replaced = replacement && timeError('data.replacement.at', replacement.at, c);
   if (replaced) return replaced;

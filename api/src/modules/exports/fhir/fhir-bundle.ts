@@ -1,22 +1,15 @@
 import { createHash } from 'node:crypto';
-import { arrayToMmHg, eventsInForce } from '@upstroke/capno';
-import { type Debrief, type DebriefEvent, drugName, type Waveform } from '@upstroke/contracts';
+import { arrayToMmHg } from '@upstroke/capno';
+import type { Debrief, Waveform } from '@upstroke/contracts';
+import { clinicalEntries } from './entries';
 import type * as R4 from './r4';
-import {
-  type Ctx,
-  cprProcedure,
-  encounterOf,
-  etco2Observations,
-  waveformObservation,
-} from './resources';
+import { cprProcedure, encounterOf, etco2Observations, waveformObservation } from './resources';
 
 export type FhirBundle = R4.Bundle;
 
 /** SNOMED CT 410429000 "Cardiac arrest (disorder)" (REFERENCE.md: SNOMED CT, checked). */
 export const SNOMED_CARDIAC_ARREST = '410429000';
 export const SNOMED = 'http://snomed.info/sct';
-/** Our own code system for event kinds that have no checked standard code here. */
-export const UPSTROKE_EVENT = 'urn:upstroke:event-kind';
 
 /**
  * A name-based UUID (RFC 4122 version 5 layout over SHA-1): the same record always gives
@@ -39,7 +32,8 @@ export interface FhirOptions {
 /**
  * The signed record as a FHIR R4 `collection` Bundle: Patient (by reference number),
  * Encounter, Condition (cardiac arrest), Procedure for CPR and per shock,
- * MedicationAdministration per drug, Observations for EtCO2 (values and the capnogram).
+ * MedicationAdministration per drug (struck ones `entered-in-error`, each replacement with a
+ * Provenance), Observations for EtCO2 (values and the capnogram).
  */
 export function toFhirBundle(d: Debrief, opts: FhirOptions): FhirBundle {
   const id = d.record.id;
@@ -84,10 +78,7 @@ export function toFhirBundle(d: Debrief, opts: FhirOptions): FhirBundle {
   });
   const cpr = cprProcedure(ctx);
   if (cpr) add('cpr', cpr);
-  for (const e of eventsInForce(d.events)) {
-    if (e.kind === 'shock') add(`shock/${e.id}`, shockProcedure(ctx, e));
-    if (e.kind === 'drug') add(`drug/${e.id}`, medicationOf(ctx, e));
-  }
+  for (const [key, resource] of clinicalEntries(ctx)) add(key, resource);
   for (const [key, obs] of etco2Observations(ctx)) add(key, obs);
   // One Observation per run of the capnogram: a data gap between runs is not sent as values.
   (opts.waveform ?? []).forEach((w, i) =>
@@ -103,49 +94,5 @@ export function toFhirBundle(d: Debrief, opts: FhirOptions): FhirBundle {
     type: 'collection',
     timestamp: d.record.signedAt ?? new Date().toISOString(),
     entry: entries.map((e) => ({ fullUrl: url(e.key), resource: e.resource })),
-  };
-}
-
-function shockProcedure(ctx: Ctx, e: DebriefEvent): R4.Procedure {
-  return {
-    resourceType: 'Procedure',
-    status: 'completed',
-    // No standard code is asserted here (not checked); our own code plus plain text.
-    code: {
-      coding: [{ system: UPSTROKE_EVENT, code: 'shock', display: 'Defibrillation shock' }],
-      text: 'Defibrillation shock',
-    },
-    subject: ctx.subject,
-    encounter: ctx.encounter,
-    performedDateTime: e.at,
-    note: typeof e.data.energyJ === 'number' ? [{ text: `${e.data.energyJ} J` }] : undefined,
-  };
-}
-
-function medicationOf(ctx: Ctx, e: DebriefEvent): R4.MedicationAdministration {
-  const dose =
-    typeof e.data.dose === 'number' && typeof e.data.unit === 'string'
-      ? {
-          value: e.data.dose,
-          unit: e.data.unit,
-          system: 'http://unitsofmeasure.org',
-          code: e.data.unit,
-        }
-      : undefined;
-  const route =
-    typeof e.data.route === 'string'
-      ? { text: e.data.route === 'io' ? 'Intraosseous' : 'Intravenous' }
-      : undefined;
-  return {
-    resourceType: 'MedicationAdministration',
-    status: 'completed',
-    medicationCodeableConcept: {
-      coding: [{ system: 'urn:upstroke:drug', code: String(e.data.drug) }],
-      text: drugName(e.data),
-    },
-    subject: ctx.subject,
-    context: ctx.encounter,
-    effectiveDateTime: e.at,
-    dosage: dose || route ? { dose, route } : undefined,
   };
 }

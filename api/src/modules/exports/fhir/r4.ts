@@ -11,6 +11,7 @@ import type {
   Organization,
   Patient,
   Procedure,
+  Provenance,
 } from 'fhir/r4';
 
 export type {
@@ -27,6 +28,7 @@ export type {
   Patient,
   Period,
   Procedure,
+  Provenance,
   Quantity,
   Reference,
   SampledData,
@@ -40,4 +42,5 @@ export type Resource =
   | Observation
   | Procedure
   | MedicationAdministration
+  | Provenance
   | Condition;

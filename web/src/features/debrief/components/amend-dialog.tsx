@@ -15,7 +15,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { useAmend } from '../api/sign-resuscitation';
-import { EventCorrection, type EventFix } from './event-correction';
+import { EventCorrection, type EventFix, fixProblem } from './event-correction';
 
 const formSchema = z.object({
   reason: z.string().trim().min(1, 'A reason is required').max(2000),
@@ -24,11 +24,14 @@ const formSchema = z.object({
 });
 type Form = z.infer<typeof formSchema>;
 
-/** A correction of a signed event: the event struck through, its replacement at the same time. */
+/** A correction of a signed event: the event struck through, its replacement (time and detail). */
 function correctionEvent(events: DebriefEvent[], fix: EventFix | null, reason: string) {
   const old = fix && events.find((e) => e.id === fix.eventId);
-  if (!fix || !old || JSON.stringify(fix.data) === JSON.stringify(old.data)) return [];
-  const replacement = { kind: old.kind, data: fix.data, at: old.at };
+  if (!fix || !old) return [];
+  const data = Object.fromEntries(Object.entries(fix.data).filter(([, v]) => v !== undefined));
+  const moved = Date.parse(fix.at) !== Date.parse(old.at);
+  if (!moved && JSON.stringify(data) === JSON.stringify(old.data)) return [];
+  const replacement = { kind: old.kind, data, at: moved ? fix.at : old.at };
   return [
     {
       id: crypto.randomUUID(),
@@ -40,8 +43,8 @@ function correctionEvent(events: DebriefEvent[], fix: EventFix | null, reason: s
 }
 
 /**
- * A correction after signing: a reason is required; it corrects an event, changes the
- * outcome or adds a note.
+ * A correction after signing: a reason is required; it corrects an event (its time, route
+ * and dose, rhythm or energy), changes the outcome or adds a note.
  */
 export function AmendDialog({
   record,
@@ -83,6 +86,7 @@ export function AmendDialog({
     watch('note').trim() !== '' ||
     watch('outcome') !== (record.outcome ?? '') ||
     correctionEvent(recorded, fix, '').length > 0;
+  const fixWrong = fix && fixProblem(fix, record.arrestAt);
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="amend-title">
       <form onSubmit={(e) => void submit(e)} noValidate>
@@ -101,7 +105,12 @@ export function AmendDialog({
                 'Shown in the record and the PDF with your name and the time.'
               }
             />
-            <EventCorrection events={recorded} fix={fix} onFix={setFix} />
+            <EventCorrection
+              events={recorded}
+              arrestAt={record.arrestAt}
+              fix={fix}
+              onFix={setFix}
+            />
             <TextField
               select
               label="Outcome"
@@ -131,7 +140,7 @@ export function AmendDialog({
           <Button
             type="submit"
             variant="contained"
-            disabled={amend.isPending || !changes}
+            disabled={amend.isPending || !changes || Boolean(fixWrong)}
             sx={{ minHeight: 48 }}
           >
             Save amendment

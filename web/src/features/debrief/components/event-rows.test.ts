@@ -86,4 +86,43 @@ describe('eventRows', () => {
     expect(rows[1].note).toBe('Amended (was Drug Epinephrine 1 mg IV): Given IO, not IV');
     expect(rows[2].note).toBe('Taken back');
   });
+
+  it('puts a replacement with a corrected dose and time at its new time, naming the old one', () => {
+    const rows = eventRows({
+      record,
+      events: [
+        ev(
+          'd',
+          200,
+          'drug',
+          { drug: 'epinephrine', dose: 1, unit: 'mg', route: 'iv' },
+          {
+            supersededBy: 'c',
+          },
+        ),
+        ev('r', 150, 'rhythm', { rhythm: 'pea' }),
+        ev(
+          'c',
+          9000,
+          'correction',
+          {
+            supersedes: 'd',
+            reason: 'Drug chart',
+            replacement: {
+              kind: 'drug',
+              at: new Date(t0 + 140_000).toISOString(),
+              data: { drug: 'epinephrine', dose: 0.5, unit: 'mg', route: 'iv' },
+            },
+          },
+          { amendment: true },
+        ),
+      ],
+    });
+    expect(rows.map((r) => [r.id, r.tSec, r.details, r.struck])).toEqual([
+      ['c', 140, 'Epinephrine 0.5 mg IV', false],
+      ['r', 150, 'PEA', false],
+      ['d', 200, 'Epinephrine 1 mg IV', true],
+    ]);
+    expect(rows[0].note).toBe('Amended (was Drug Epinephrine 1 mg IV at 3:20): Drug chart');
+  });
 });

@@ -1,4 +1,5 @@
 import {
+  clockFromArrest,
   type Debrief,
   type DebriefEvent,
   eventDetails,
@@ -67,8 +68,11 @@ export function eventRows(d: Pick<Debrief, 'events' | 'record'>): EventRow[] {
     const r = corr(e).replacement;
     if (e.supersededBy || !r) continue;
     const old = corr(e).supersedes ? byId.get(corr(e).supersedes ?? '') : undefined;
+    // A replacement at another time also says when the struck entry stood.
+    const moved = old && Date.parse(old.at) !== Date.parse(r.at);
     const was = old
-      ? `${labelOf(eventKindLabels, old.kind)} ${eventDetails(old.kind, old.data)}`
+      ? `${labelOf(eventKindLabels, old.kind)} ${eventDetails(old.kind, old.data)}`.trim() +
+        (moved ? ` at ${clockFromArrest(old.tSec)}` : '')
       : '';
     rows.push({
       id: e.id,
