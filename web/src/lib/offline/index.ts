@@ -21,6 +21,7 @@ export { startSync, syncEngine } from './engine-instance';
 export { type LocalRecord, storedFromLocal } from './stored-record';
 export { useSyncState, type SyncState } from './use-sync-state';
 export { useRemoteEntries } from './use-remote-entries';
+export { appendOnlyReader, useRecordRows } from './record-rows';
 export { apiTransport, wireSchemas } from './transport';
 export { discardRefused } from './discard-refused';
 export {

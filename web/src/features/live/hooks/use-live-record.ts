@@ -3,7 +3,13 @@ import { type Resuscitation, type Thresholds, thresholdDefaults } from '@upstrok
 import { useLiveQuery } from 'dexie-react-hooks';
 import { useEffect, useMemo } from 'react';
 import { apiFetch } from '../../../lib/api-client';
-import { offlineDb, type SyncAck, useRemoteEntries, wireSchemas } from '../../../lib/offline';
+import {
+  offlineDb,
+  type SyncAck,
+  useRecordRows,
+  useRemoteEntries,
+  wireSchemas,
+} from '../../../lib/offline';
 
 /**
  * The record, its events and EtCO2 values as this tablet holds them (IndexedDB first). A
@@ -12,17 +18,9 @@ import { offlineDb, type SyncAck, useRemoteEntries, wireSchemas } from '../../..
  */
 export function useLiveRecord(id: string) {
   const record = useLiveQuery(() => offlineDb.resuscitations.get(id), [id], null);
-  const events = useLiveQuery(
-    () =>
-      offlineDb.events.where('[resuscitationId+at]').between([id, ''], [id, '\uffff']).toArray(),
-    [id],
-    [],
-  );
-  const etco2 = useLiveQuery(
-    () => offlineDb.etco2.where('[resuscitationId+at]').between([id, ''], [id, '\uffff']).toArray(),
-    [id],
-    [],
-  );
+  // Events and typed values are append-only: after a commit only the new rows are read.
+  const events = useRecordRows(offlineDb.events, id);
+  const etco2 = useRecordRows(offlineDb.etco2, id);
   // The server's answers, for the "waiting" and "refused" marks (kept apart from the taps).
   const answers = useLiveQuery(
     () => offlineDb.acks.where('resuscitationId').equals(id).toArray(),
