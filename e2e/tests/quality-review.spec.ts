@@ -1,7 +1,9 @@
 import assert from 'node:assert/strict';
 import { after, before, describe, it } from 'node:test';
 import {
+  type Debrief,
   defaultDisplayFormat,
+  formatPercent,
   formatDateTime,
   type RecordingContext,
   type ReviewQueueItem,
@@ -20,7 +22,11 @@ function quarterOf(iso: string): { from: string; to: string } {
 }
 
 /** A signed demo record awaiting review (the demo seed signs most of its records). */
-async function recordAwaitingReview(): Promise<{ item: ReviewQueueItem; when: string }> {
+async function recordAwaitingReview(): Promise<{
+  item: ReviewQueueItem;
+  when: string;
+  debrief: Debrief;
+}> {
   const login = await fetch(`${baseUrl}/api/auth/login`, {
     method: 'POST',
     headers: { 'Content-Type': 'application/json' },
@@ -38,7 +44,13 @@ async function recordAwaitingReview(): Promise<{ item: ReviewQueueItem; when: st
     await fetch(`${baseUrl}/api/context`, { headers: { Authorization: `Bearer ${accessToken}` } })
   ).json()) as RecordingContext;
   const display = context.sites.find((s) => s.id === item.siteId)?.display;
-  return { item, when: formatDateTime(item.arrestAt, display ?? defaultDisplayFormat) };
+  // The debrief the API composes: the review dialog must show its measures and findings.
+  const debrief = (await (
+    await fetch(`${baseUrl}/api/resuscitations/${item.resuscitationId}/debrief`, {
+      headers: { Authorization: `Bearer ${accessToken}` },
+    })
+  ).json()) as Debrief;
+  return { item, when: formatDateTime(item.arrestAt, display ?? defaultDisplayFormat), debrief };
 }
 
 describe('quality committee reviews a record found through Trends', () => {
@@ -50,7 +62,7 @@ describe('quality committee reviews a record found through Trends', () => {
   after(() => close());
 
   it('filters to one unit and one quarter, opens the record, marks it reviewed', async () => {
-    const { item: target, when } = await recordAwaitingReview();
+    const { item: target, when, debrief } = await recordAwaitingReview();
     const { from, to } = quarterOf(target.arrestAt);
     const context = await newTabletContext(browser);
     const page = await context.newPage();
@@ -87,6 +99,18 @@ describe('quality committee reviews a record found through Trends', () => {
     const row = page.getByRole('row').filter({ has: page.getByRole('link', { name: when }) });
     await row.getByRole('button', { name: 'Review' }).click();
     const dialog = page.getByRole('dialog');
+    // The record's measures and findings, as the API's debrief has them, and its Debrief.
+    const fraction = dialog
+      .getByRole('table', { name: 'Measures' })
+      .getByRole('row', { name: /Compression fraction/ });
+    await fraction.waitFor();
+    const cells = (await fraction.getByRole('cell').allInnerTexts()).map((c) => c.trim());
+    assert.deepEqual(cells, [formatPercent(debrief.measures.compressionFraction)]);
+    await dialog.getByText(`Findings (${debrief.findings.length})`).waitFor();
+    const findings = dialog.getByRole('list', { name: 'Findings' }).getByRole('listitem');
+    assert.equal(await findings.count(), Math.max(1, debrief.findings.length));
+    const open = dialog.getByRole('link', { name: 'Open the Debrief' });
+    assert.equal(await open.getAttribute('href'), `/debrief/${target.resuscitationId}`);
     await dialog.getByRole('radio', { name: 'Reviewed' }).check();
     await dialog.getByLabel('Comment').fill('Pauses discussed with the team; no further action.');
     await dialog.getByRole('button', { name: 'Save review' }).click();

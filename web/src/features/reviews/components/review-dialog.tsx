@@ -27,13 +27,17 @@ import { Controller, useForm } from 'react-hook-form';
 import { useReviewHistory } from '../api/get-review-history';
 import { useSaveReview } from '../api/save-review';
 import { useDisplayFormat } from '../../../hooks/use-display-format';
+import { RecordSummary } from './record-summary';
 
 interface Props {
   item: ReviewQueueItem;
   onClose: () => void;
 }
 
-/** Set a record's review status with a comment; earlier entries stay listed below. */
+/**
+ * The record's measures and findings (with a link to its Debrief), then its review status
+ * with a comment; earlier entries stay listed below.
+ */
 export function ReviewDialog({ item, onClose }: Props) {
   const history = useReviewHistory(item.resuscitationId);
   const save = useSaveReview(item.resuscitationId);
@@ -46,12 +50,13 @@ export function ReviewDialog({ item, onClose }: Props) {
     save.mutateAsync(input).then(onClose, () => undefined),
   );
   return (
-    <Dialog open onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="review-title">
+    <Dialog open onClose={onClose} fullWidth maxWidth="md" aria-labelledby="review-title">
       <form onSubmit={(e) => void submit(e)} noValidate>
         <DialogTitle id="review-title">
           Review of the arrest on {dateTime(item.arrestAt)}
         </DialogTitle>
         <DialogContent>
+          <RecordSummary resuscitationId={item.resuscitationId} />
           {save.error ? <Alert severity="error">{save.error.message}</Alert> : null}
           <Controller
             name="status"
