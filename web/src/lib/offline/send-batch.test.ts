@@ -71,7 +71,7 @@ describe('one bad item never stalls the outbox', () => {
   it('after two failed drains the engine bisects on its own', async () => {
     const { events } = await notes(10);
     server.poisonIds.add(events[0].id);
-    let now = 0;
+    let now = Date.now(); // the tablet's clock, as plausible as the server's
     const engine = new SyncEngine(db, server, {
       isOnline: () => true,
       hasSession: () => true,
@@ -101,6 +101,27 @@ describe('one bad item never stalls the outbox', () => {
     expect(await db.acks.count()).toBe(0);
     expect(await countRefused(db)).toBe(0);
     expect(await countWaiting(db)).toBe(4);
+  });
+
+  it('sends not even the record start while the tablet clock is beyond what the server takes', async () => {
+    await notes(2);
+    server.clockSkewMs = 3 * 24 * 3_600_000; // tablet 3 days ahead: its arrest is "in the future"
+    const engine = new SyncEngine(db, server, { isOnline: () => true, hasSession: () => true });
+    expect(await engine.syncNow()).toBeNull();
+    expect(engine.getState().clockRefused).toMatch(
+      /72 h ahead of the server's: check the tablet's date and time/,
+    );
+    expect(server.calls).toEqual([]);
+    expect(await db.outbox.count()).toBe(1);
+    expect(await db.outbox.filter((op) => Boolean(op.failed)).count()).toBe(0);
+    expect(await countWaiting(db)).toBe(3);
+    // The time fixed, the same entries go: nothing was lost or refused meanwhile.
+    server.clockSkewMs = 0;
+    expect(await engine.syncNow(true)).toEqual({ sent: 2, refused: 0 });
+    engine.stop();
+    expect(engine.getState().clockRefused).toBeNull();
+    expect(server.records.size).toBe(1);
+    expect(server.stored.events.size).toBe(2);
   });
 
   it('lets a lead discard refused entries with a reason: told to the server, kept here', async () => {

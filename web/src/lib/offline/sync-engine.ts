@@ -1,3 +1,4 @@
+import { PLAUSIBLE } from '@upstroke/contracts';
 import { authStore } from '../auth-store';
 import { backoffDelay, type BackoffOptions } from './backoff';
 import { measureClock } from './clock';
@@ -20,6 +21,19 @@ export interface EngineState {
 
 /** Consecutive failed drains after which a batch failing with 5xx is split. */
 const BISECT_AFTER_FAILURES = 2;
+
+/**
+ * A tablet whose clock is further from the server's than the API accepts sends nothing: the
+ * server would refuse its batches (400 on X-Clock-Offset-Ms) and its record starts too (an
+ * arrest in the future), so the entries wait on the tablet until its time is fixed.
+ */
+function checkClock(offsetMs: number): void {
+  if (Math.abs(offsetMs) <= PLAUSIBLE.clockOffsetMs) return;
+  const hours = Math.round(Math.abs(offsetMs) / 3_600_000);
+  throw new ClockRefusedError(
+    `This tablet's clock is ${hours} h ${offsetMs > 0 ? 'ahead of' : 'behind'} the server's: check the tablet's date and time. Entries are kept on the tablet.`,
+  );
+}
 
 export interface EngineOptions {
   intervalMs?: number;
@@ -112,6 +126,7 @@ export class SyncEngine {
         { key: 'context', value: context },
         { key: 'clock', value: { offsetMs, at: context.serverTime } },
       ]);
+      checkClock(offsetMs);
       const result = (await countWaiting(this.db))
         ? await drainOutbox(
             this.db,
