@@ -1,15 +1,16 @@
 // `npm start`: everything from a clean clone to the app on http://localhost:8080.
 // Uses Node built-ins only until the npm packages are installed.
 import { spawn } from 'node:child_process';
-import crypto from 'node:crypto';
-import fs from 'node:fs';
 import path from 'node:path';
+import { createRequire } from 'node:module';
 import { fileURLToPath } from 'node:url';
 import { buildAll, migrateAndSeed } from './lib/build.mjs';
 import { ensureDependencies } from './lib/deps.mjs';
 import { ensureDatabase, ensureRoles, startCluster } from './lib/postgres.mjs';
 import { log } from './lib/run.mjs';
 import { waitForHttp } from './lib/wait.mjs';
+
+const { jwtSecret: keptJwtSecret } = createRequire(import.meta.url)('./lib/jwt-secret.cjs');
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const port = Number(process.env.PORT ?? 8080);
@@ -28,18 +29,10 @@ function stopAll(code) {
   process.exit(code);
 }
 
-/**
- * The token-signing secret: JWT_SECRET, or one generated on the first start and kept in
- * .local/jwt-secret (readable by this user only), so a restart keeps tablets signed in.
- */
+/** The token-signing secret, kept in .local/jwt-secret across restarts (lib/jwt-secret.cjs). */
 function jwtSecret() {
-  if (process.env.JWT_SECRET) return process.env.JWT_SECRET;
-  const file = path.join(root, '.local', 'jwt-secret');
-  if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim();
-  fs.mkdirSync(path.dirname(file), { recursive: true });
-  const secret = crypto.randomBytes(32).toString('hex');
-  fs.writeFileSync(file, `${secret}\n`, { mode: 0o600 });
-  log('generated a token-signing secret in .local/jwt-secret');
+  const { secret, generated } = keptJwtSecret(root);
+  if (generated) log('generated a token-signing secret in .local/jwt-secret');
   return secret;
 }
 
