@@ -14,7 +14,7 @@ function rowOf(words: PlacedWord[], marker: (w: PlacedWord) => boolean): PlacedW
   const anchor = words.find(marker);
   if (!anchor) throw new Error('row not found');
   return words
-    .filter((w) => Math.abs(w.yMin - anchor.yMin) < 2 && w !== undefined)
+    .filter((w) => w.page === anchor.page && Math.abs(w.yMin - anchor.yMin) < 2)
     .sort((a, b) => a.xMin - b.xMin);
 }
 

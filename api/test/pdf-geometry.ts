@@ -5,6 +5,8 @@ import zlib from 'node:zlib';
 /** One word as pdftotext places it (points, from the top left of its page). */
 export interface PlacedWord {
   text: string;
+  /** 1-based page number: rows on different pages may share a y. */
+  page: number;
   xMin: number;
   yMin: number;
   xMax: number;
@@ -23,13 +25,19 @@ export function placedWords(file: string): PlacedWord[] {
   const html = execFileSync('pdftotext', ['-bbox', file, '-'], { encoding: 'utf8' });
   const re =
     /<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)<\/word>/g;
-  return [...html.matchAll(re)].map((m) => ({
-    xMin: Number(m[1]),
-    yMin: Number(m[2]),
-    xMax: Number(m[3]),
-    yMax: Number(m[4]),
-    text: decode(m[5]),
-  }));
+  return html
+    .split(/<page /)
+    .slice(1)
+    .flatMap((pageHtml, index) =>
+      [...pageHtml.matchAll(re)].map((m) => ({
+        page: index + 1,
+        xMin: Number(m[1]),
+        yMin: Number(m[2]),
+        xMax: Number(m[3]),
+        yMax: Number(m[4]),
+        text: decode(m[5]),
+      })),
+    );
 }
 
 /**
