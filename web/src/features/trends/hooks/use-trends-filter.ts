@@ -15,16 +15,21 @@ export function trendsFilterFrom(params: URLSearchParams): TrendsFilter {
   return filter as TrendsFilter;
 }
 
+/** The params with the filter patched in; other keys (the baseline) are kept. */
+export function filtersInto(current: URLSearchParams, patch: Partial<TrendsFilter>) {
+  const next: TrendsFilter = { ...trendsFilterFrom(current), ...patch };
+  const out = new URLSearchParams(current);
+  for (const key of keys) {
+    if (next[key]) out.set(key, String(next[key]));
+    else out.delete(key);
+  }
+  return out;
+}
+
 /** Trends filters kept in the URL, so a reload, a bookmark or a shared link keeps them. */
 /** Changes are patches over the latest filter, so quick successive changes all hold. */
 export function useTrendsFilter(): [TrendsFilter, (patch: Partial<TrendsFilter>) => void] {
   const [params, update] = useUrlSearch();
-  const set = (patch: Partial<TrendsFilter>) =>
-    update((current) => {
-      const next: TrendsFilter = { ...trendsFilterFrom(current), ...patch };
-      const out = new URLSearchParams();
-      for (const key of keys) if (next[key]) out.set(key, String(next[key]));
-      return out;
-    });
+  const set = (patch: Partial<TrendsFilter>) => update((current) => filtersInto(current, patch));
   return [trendsFilterFrom(params), set];
 }

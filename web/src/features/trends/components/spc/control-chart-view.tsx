@@ -3,7 +3,8 @@ import { type SpcMeasure, spcMeasureLabels, type TrendsFilter } from '@upstroke/
 import { useState } from 'react';
 import { ErrorState, Loading } from '../../../../components/ui/states';
 import { useDisplayFormat } from '../../../../hooks/use-display-format';
-import { type BaselineMonths, useControlChart } from '../../api/get-control-chart';
+import { useControlChart } from '../../api/get-control-chart';
+import { useBaseline } from '../../hooks/use-baseline';
 import { BaselineFields } from './baseline-fields';
 import { ControlChartCanvas } from './control-chart-canvas';
 import { ControlPointsTable } from './control-points-table';
@@ -22,7 +23,7 @@ export function ControlChartView({
   filter: TrendsFilter;
 }) {
   const [measure, setMeasure] = useState<SpcMeasure>(measures[0]!);
-  const [baseline, setBaseline] = useState<BaselineMonths>({});
+  const [baseline, setBaseline] = useBaseline();
   const [point, setPoint] = useState<PointSelection | null>(null);
   const chart = useControlChart(filter, measure, baseline);
   const title = spcMeasureLabels[measure];
