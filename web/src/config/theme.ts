@@ -1,21 +1,42 @@
+import type { ButtonProps, ChipProps } from '@mui/material';
 import { createTheme, type PaletteMode } from '@mui/material/styles';
+import { surfaces, type Tone, tones } from './palette';
+
+const toneNames: readonly Tone[] = ['primary', 'secondary', 'error', 'warning', 'success', 'info'];
+
+/** A filled button's or chip's fill and text from our own table (muted fills in the dark). */
+function filled(mode: PaletteMode, color: ButtonProps['color'] | ChipProps['color']) {
+  const tone = toneNames.find((t) => t === color);
+  if (!tone) return {};
+  const c = tones[mode][tone];
+  return {
+    backgroundColor: c.fill,
+    color: c.fillText,
+    '&:hover': { backgroundColor: c.fillHover },
+    // In a dim room a thin edge of the same hue tells the buttons apart without glare.
+    ...(mode === 'dark' ? { boxShadow: `inset 0 0 0 1px ${c.main}55` } : {}),
+  };
+}
 
 /**
- * Upstroke's own look: deep teal for structure, ember orange for the rising edge of the
- * capnogram (our mark), high contrast for arm's-length reading, a dark mode for dim rooms.
+ * Upstroke's own look (colours in palette.ts): high contrast for arm's-length reading and a
+ * dark mode for dim rooms — near-black surfaces, soft light text, deep muted fills.
  */
 export function makeTheme(mode: PaletteMode) {
-  const dark = mode === 'dark';
+  const s = surfaces[mode];
+  const palette = Object.fromEntries(
+    toneNames.map((t) => [
+      t,
+      { main: tones[mode][t].main, contrastText: tones[mode][t].contrastText },
+    ]),
+  );
   return createTheme({
     palette: {
       mode,
-      primary: { main: dark ? '#5cc8d6' : '#0b4f5c', contrastText: dark ? '#06252b' : '#ffffff' },
-      secondary: { main: dark ? '#ffa26b' : '#c2410c' },
-      error: { main: dark ? '#ff7b7b' : '#b3261e' },
-      warning: { main: dark ? '#ffc857' : '#8a5a00' },
-      success: { main: dark ? '#6fdc9a' : '#1e6b3a' },
-      info: { main: dark ? '#8ab4ff' : '#2556a8' },
-      background: { default: dark ? '#0e1417' : '#f5f6f2', paper: dark ? '#162025' : '#ffffff' },
+      ...palette,
+      background: { default: s.page, paper: s.paper },
+      text: { primary: s.text, secondary: s.textSecondary },
+      divider: s.divider,
     },
     shape: { borderRadius: 10 },
     typography: {
@@ -26,10 +47,29 @@ export function makeTheme(mode: PaletteMode) {
       button: { textTransform: 'none', fontWeight: 600 },
     },
     components: {
-      MuiButton: { styleOverrides: { root: { minHeight: 48 } } },
+      MuiButton: {
+        styleOverrides: {
+          root: { minHeight: 48 },
+          contained: ({ ownerState }) => filled(mode, ownerState.color),
+        },
+      },
+      MuiChip: {
+        styleOverrides: {
+          filled: ({ ownerState }) => ({
+            ...filled(mode, ownerState.color),
+            '& .MuiChip-icon': { color: 'inherit' },
+          }),
+        },
+      },
       MuiIconButton: { styleOverrides: { root: { minWidth: 48, minHeight: 48 } } },
       MuiTab: { styleOverrides: { root: { minHeight: 48 } } },
       MuiListItemButton: { styleOverrides: { root: { minHeight: 48 } } },
+      // The top bar: deep teal by day, the paper's near-black in the dark.
+      MuiAppBar: {
+        styleOverrides: {
+          colorPrimary: mode === 'dark' ? { backgroundColor: '#13292d', color: s.text } : {},
+        },
+      },
     },
   });
 }

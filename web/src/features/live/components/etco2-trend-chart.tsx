@@ -9,6 +9,7 @@ import {
 import annotationPlugin from 'chartjs-plugin-annotation';
 import { type Etco2DisplayUnit, formatEtco2 } from '@upstroke/contracts';
 import { Line } from 'react-chartjs-2';
+import { useChartColours } from '../../../hooks/use-chart-colours';
 
 ChartJS.register(LinearScale, CategoryScale, PointElement, LineElement, Tooltip, annotationPlugin);
 
@@ -20,18 +21,19 @@ export function Etco2TrendChart(props: {
   scale: number;
 }) {
   const { points, scale } = props;
+  const c = useChartColours();
   return (
     <Line
       role="img"
       aria-label={`EtCO2 trend, ${points.length} values, low band below ${formatEtco2(props.lowMmHg, props.unit)}`}
       data={{
-        datasets: [
-          { data: points, borderColor: '#c2410c', backgroundColor: '#c2410c', pointRadius: 3 },
-        ],
+        datasets: [{ data: points, borderColor: c.mark, backgroundColor: c.mark, pointRadius: 3 }],
       }}
       options={{
         animation: false,
         maintainAspectRatio: false,
+        color: c.text,
+        borderColor: c.grid,
         scales: {
           x: { type: 'linear', min: 0, title: { display: true, text: 'min' } },
           y: { min: 0, suggestedMax: 40 * scale },
@@ -44,7 +46,7 @@ export function Etco2TrendChart(props: {
                 type: 'box',
                 yMin: 0,
                 yMax: props.lowMmHg * scale,
-                backgroundColor: 'rgba(179,38,30,0.15)',
+                backgroundColor: c.lowBand,
                 borderWidth: 0,
               },
             },

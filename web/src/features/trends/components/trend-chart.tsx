@@ -12,6 +12,7 @@ import {
 import annotationPlugin from 'chartjs-plugin-annotation';
 import { useState } from 'react';
 import { Line } from 'react-chartjs-2';
+import { useChartColours } from '../../../hooks/use-chart-colours';
 import { useDisplayFormat } from '../../../hooks/use-display-format';
 import { type ChartView, ChartViewToggle } from './spc/chart-view-toggle';
 import { ControlChartView } from './spc/control-chart-view';
@@ -51,6 +52,7 @@ export function TrendChart({
   spc,
   filter = {},
 }: ChartSpec & { filter?: TrendsFilter }) {
+  const chartColours = useChartColours();
   const [view, setView] = useState<ChartView>('line');
   const control = view === 'control' && Boolean(spc?.length);
   const { month } = useDisplayFormat(filter.siteId);
@@ -85,6 +87,8 @@ export function TrendChart({
           sx={{ height: 220, display: control ? 'none' : undefined }}
         >
           <Line
+            // The box around it is the image and carries its description.
+            aria-hidden
             data={{
               labels,
               datasets: [
@@ -100,6 +104,8 @@ export function TrendChart({
             options={{
               responsive: true,
               maintainAspectRatio: false,
+              color: chartColours.text,
+              borderColor: chartColours.grid,
               plugins: {
                 legend: { display: false },
                 annotation: {

@@ -9,6 +9,7 @@ import {
   Tooltip,
 } from 'chart.js';
 import { Line } from 'react-chartjs-2';
+import { useChartColours } from '../../../../hooks/use-chart-colours';
 import { axisUnit, chartValue, formatSpcValue } from './spc-format';
 
 ChartJS.register(CategoryScale, LinearScale, PointElement, LineElement, Tooltip);
@@ -33,6 +34,7 @@ export function ControlChartCanvas({
   onPoint: (index: number) => void;
   monthName: (month: string) => string;
 }) {
+  const chartColours = useChartColours();
   const m = chart.measure;
   const pts = chart.points;
   const values = pts.map((p) => chartValue(m, p.value));
@@ -60,6 +62,8 @@ export function ControlChartCanvas({
       sx={{ height: 260 }}
     >
       <Line
+        // The box around it is the image and carries its description.
+        aria-hidden
         data={{
           labels: pts.map((p) => `${monthName(p.month)} (n=${p.n})`),
           datasets: [
@@ -91,6 +95,8 @@ export function ControlChartCanvas({
         options={{
           responsive: true,
           maintainAspectRatio: false,
+          color: chartColours.text,
+          borderColor: chartColours.grid,
           onClick: (_e, elements) => {
             const hit = elements.find((el) => el.datasetIndex === 0);
             if (hit) onPoint(hit.index);

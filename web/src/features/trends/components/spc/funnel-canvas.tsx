@@ -2,6 +2,7 @@ import { Box } from '@mui/material';
 import type { FunnelResponse } from '@upstroke/contracts';
 import { Chart as ChartJS, LinearScale, LineElement, PointElement, Tooltip } from 'chart.js';
 import { Scatter } from 'react-chartjs-2';
+import { useChartColours } from '../../../../hooks/use-chart-colours';
 
 ChartJS.register(LinearScale, PointElement, LineElement, Tooltip);
 
@@ -27,6 +28,7 @@ export function FunnelCanvas({
   funnel: FunnelResponse;
   onPoint: (index: number) => void;
 }) {
+  const chartColours = useChartColours();
   const shown = funnel.points.flatMap((p, i) => (p.p === null ? [] : [{ p, i }]));
   const curve = funnel.curve;
   const maxN = curve.at(-1)?.n ?? 1;
@@ -34,6 +36,8 @@ export function FunnelCanvas({
   return (
     <Box role="img" aria-label="Funnel plot; the table below lists every unit" sx={{ height: 280 }}>
       <Scatter
+        // The box around it is the image and carries its description.
+        aria-hidden
         data={{
           datasets: [
             {
@@ -85,6 +89,8 @@ export function FunnelCanvas({
         options={{
           responsive: true,
           maintainAspectRatio: false,
+          color: chartColours.text,
+          borderColor: chartColours.grid,
           onClick: (_e, elements) => {
             const hit = elements.find((el) => el.datasetIndex === 0);
             if (hit) onPoint(shown[hit.index]!.i);
