@@ -1,4 +1,6 @@
 import type { AnnotationOptions } from 'chartjs-plugin-annotation';
+import { type ChartColours, chartColours } from '../../../config/chart-colours';
+import type { PlacedMarker } from './marker-thinning';
 import type { Band, Marker, TimelineModel } from './timeline-model';
 
 /** The marker in focus, shared with the event table (hover or tap on either side). */
@@ -14,17 +16,21 @@ function markerColour(e: Marker): string {
 }
 
 /**
- * One line per event with its code along the top, in three rows so that close events stay
- * readable. Hovering or tapping the code shows the event in words (its tooltip) and picks
- * its row in the event table.
+ * One line per event kept at this zoom, its code along the top in the row it was given (see
+ * thinMarkers), so that close events stay readable. Hovering or tapping the code shows the
+ * event in words (its tooltip) and picks its row in the event table.
  */
-function markerAnnotation(e: Marker, i: number, link: MarkerLink): AnnotationOptions {
+function markerAnnotation(
+  { marker: e, row }: PlacedMarker,
+  link: MarkerLink,
+  c: ChartColours,
+): AnnotationOptions {
   const on = link.active === e.id;
   return {
     type: 'line',
     xMin: e.tSec,
     xMax: e.tSec,
-    borderColor: on ? '#0b5c8a' : e.amendment ? '#9a5b00' : 'rgba(60, 60, 60, 0.45)',
+    borderColor: on ? '#0b5c8a' : e.amendment ? '#9a5b00' : c.markerLine,
     borderWidth: on ? 3 : 1,
     hitTolerance: 8,
     z: on ? 10 : 0,
@@ -34,7 +40,7 @@ function markerAnnotation(e: Marker, i: number, link: MarkerLink): AnnotationOpt
       display: true,
       content: on ? [e.code, e.label] : e.code,
       position: 'end',
-      yAdjust: (i % 3) * 20,
+      yAdjust: row * 20,
       backgroundColor: on ? '#0b5c8a' : markerColour(e),
       font: { size: on ? 12 : 11 },
       padding: 3,
@@ -43,20 +49,22 @@ function markerAnnotation(e: Marker, i: number, link: MarkerLink): AnnotationOpt
   };
 }
 
-/** Shaded bands, the low threshold, rises and one labelled line per event. */
+/** Shaded bands, the low threshold, rises and one labelled line per event kept. */
 export function annotationsOf(
   m: TimelineModel,
   highlight: Band | null,
   yMax: number,
   link: MarkerLink = { active: null, onActive: () => undefined },
+  placed: readonly PlacedMarker[] = m.markers.map((marker, i) => ({ marker, row: i % 3 })),
+  c: ChartColours = chartColours.light,
 ): Record<string, AnnotationOptions> {
   const out: Record<string, AnnotationOptions> = {};
-  m.compressions.forEach((c, i) => {
+  m.compressions.forEach((b, i) => {
     out[`cpr${i}`] = {
       type: 'box',
-      xMin: c.startSec,
-      xMax: c.endSec,
-      backgroundColor: 'rgba(76, 160, 96, 0.12)',
+      xMin: b.startSec,
+      xMax: b.endSec,
+      backgroundColor: c.compressions,
       borderWidth: 0,
       drawTime: 'beforeDatasetsDraw',
     };
@@ -66,7 +74,7 @@ export function annotationsOf(
       type: 'box',
       xMin: l.startSec,
       xMax: l.endSec,
-      backgroundColor: 'rgba(200, 60, 50, 0.22)',
+      backgroundColor: c.lowBand,
       borderWidth: 0,
       drawTime: 'beforeDatasetsDraw',
     };
@@ -76,14 +84,14 @@ export function annotationsOf(
       type: 'box',
       xMin: r.startSec,
       xMax: r.endSec,
-      backgroundColor: 'rgba(31, 111, 178, 0.12)',
+      backgroundColor: c.rosc,
       borderWidth: 0,
       drawTime: 'beforeDatasetsDraw',
       label: {
         display: true,
         content: 'ROSC',
         position: { x: 'start', y: 'start' },
-        color: '#1f4e79',
+        color: c.roscText,
       },
     };
   });
@@ -92,7 +100,7 @@ export function annotationsOf(
       type: 'box',
       xMin: g.startSec,
       xMax: g.endSec,
-      backgroundColor: 'rgba(120, 130, 140, 0.18)',
+      backgroundColor: c.gap,
       borderWidth: 0,
       drawTime: 'beforeDatasetsDraw',
     };
@@ -101,7 +109,7 @@ export function annotationsOf(
     type: 'line',
     yMin: m.lowLine,
     yMax: m.lowLine,
-    borderColor: '#c0392b',
+    borderColor: c.lowLine,
     borderWidth: 1,
     borderDash: [4, 4],
   };
@@ -116,8 +124,8 @@ export function annotationsOf(
       label: { display: true, content: r.label, position: 'center', backgroundColor: '#1f6fb2' },
     };
   });
-  m.markers.forEach((e, i) => {
-    out[`ev${i}`] = markerAnnotation(e, i, link);
+  placed.forEach((p, i) => {
+    out[`ev${i}`] = markerAnnotation(p, link, c);
   });
   if (highlight) {
     out.focus = {
@@ -126,8 +134,8 @@ export function annotationsOf(
       xMax: highlight.endSec,
       yMin: 0,
       yMax,
-      backgroundColor: 'rgba(255, 193, 7, 0.12)',
-      borderColor: '#f9a825',
+      backgroundColor: c.focusFill,
+      borderColor: c.focusLine,
       borderWidth: 2,
     };
   }

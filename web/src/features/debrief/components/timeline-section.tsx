@@ -57,7 +57,7 @@ export const TimelineSection = forwardRef<HTMLElement, Props>(function TimelineS
           sx={{
             display: 'grid',
             gap: 2,
-            gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 3fr) minmax(0, 2fr)' },
+            gridTemplateColumns: { xs: 'minmax(0, 1fr)', lg: 'minmax(0, 3fr) minmax(0, 2fr)' },
           }}
         >
           <TimelineChart
