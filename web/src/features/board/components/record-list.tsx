@@ -1,4 +1,4 @@
-import { List, ListItemButton, ListItemText, Paper, Typography } from '@mui/material';
+import { List, ListItem, ListItemButton, ListItemText, Paper, Typography } from '@mui/material';
 import { Link } from 'react-router-dom';
 import { labelOf, resuscitationStatusLabels } from '@upstroke/contracts';
 import { useDisplayFormat } from '../../../hooks/use-display-format';
@@ -26,12 +26,14 @@ export function RecordRows({
   return (
     <List aria-label={label}>
       {rows.map((r) => (
-        <ListItemButton key={r.id} component={Link} to={r.to} sx={{ minHeight: 56 }}>
-          <ListItemText
-            primary={`${dateTime(r.arrestAt)} · ${labelOf(resuscitationStatusLabels, r.status)}`}
-            secondary={r.detail}
-          />
-        </ListItemButton>
+        <ListItem key={r.id} disablePadding>
+          <ListItemButton component={Link} to={r.to} sx={{ minHeight: 56 }}>
+            <ListItemText
+              primary={`${dateTime(r.arrestAt)} · ${labelOf(resuscitationStatusLabels, r.status)}`}
+              secondary={r.detail}
+            />
+          </ListItemButton>
+        </ListItem>
       ))}
     </List>
   );

@@ -3,6 +3,7 @@ import {
   Alert,
   Chip,
   List,
+  ListItem,
   ListItemButton,
   ListItemText,
   ListSubheader,
@@ -72,51 +73,53 @@ function FindingGroups({ findings, selected, onSelect }: Props) {
             {findingKindLabels[g.kind as Finding['kind']] ?? g.kind} ({g.items.length})
           </ListSubheader>
           {g.items.map(([f, i]) => (
-            <ListItemButton
-              key={`${f.kind}-${f.startSec}-${i}`}
-              selected={selected === i}
-              aria-current={selected === i ? 'true' : undefined}
-              onClick={() => onSelect(i)}
-              sx={{
-                alignItems: 'flex-start',
-                minHeight: 48,
-                borderBottom: 1,
-                borderColor: 'divider',
-              }}
-            >
-              <ListItemText
-                disableTypography
-                primary={
-                  <Stack
-                    direction="row"
-                    spacing={1}
-                    sx={{ alignItems: 'center', flexWrap: 'wrap' }}
-                  >
-                    <Chip
-                      size="small"
-                      label={severityLabels[f.severity]}
-                      color={chipColor[f.severity]}
-                    />
-                    <Typography variant="subtitle2">
-                      {findingKindLabels[f.kind] ?? f.kind}, {clockFromArrest(f.startSec)} –{' '}
-                      {clockFromArrest(f.endSec)}
-                    </Typography>
-                    {f.confounder && (
+            // A list holds items: each finding's button sits in its own item.
+            <ListItem key={`${f.kind}-${f.startSec}-${i}`} disablePadding>
+              <ListItemButton
+                selected={selected === i}
+                aria-current={selected === i ? 'true' : undefined}
+                onClick={() => onSelect(i)}
+                sx={{
+                  alignItems: 'flex-start',
+                  minHeight: 48,
+                  borderBottom: 1,
+                  borderColor: 'divider',
+                }}
+              >
+                <ListItemText
+                  disableTypography
+                  primary={
+                    <Stack
+                      direction="row"
+                      spacing={1}
+                      sx={{ alignItems: 'center', flexWrap: 'wrap' }}
+                    >
                       <Chip
                         size="small"
-                        variant="outlined"
-                        label={confounderLabels[f.confounder]}
+                        label={severityLabels[f.severity]}
+                        color={chipColor[f.severity]}
                       />
-                    )}
-                  </Stack>
-                }
-                secondary={
-                  <Typography variant="body2" sx={{ mt: 0.5 }}>
-                    {f.message}
-                  </Typography>
-                }
-              />
-            </ListItemButton>
+                      <Typography variant="subtitle2">
+                        {findingKindLabels[f.kind] ?? f.kind}, {clockFromArrest(f.startSec)} –{' '}
+                        {clockFromArrest(f.endSec)}
+                      </Typography>
+                      {f.confounder && (
+                        <Chip
+                          size="small"
+                          variant="outlined"
+                          label={confounderLabels[f.confounder]}
+                        />
+                      )}
+                    </Stack>
+                  }
+                  secondary={
+                    <Typography variant="body2" sx={{ mt: 0.5 }}>
+                      {f.message}
+                    </Typography>
+                  }
+                />
+              </ListItemButton>
+            </ListItem>
           ))}
         </Fragment>
       ))}
