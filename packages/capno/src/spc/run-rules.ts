@@ -12,13 +12,22 @@ import type { ControlPoint, Signal } from './types.js';
  */
 export const RUN_LENGTH = 8;
 
+/**
+ * Differences within a few parts in a billion are rounding (a mean of twelve equal 0.1s is
+ * 0.09999999999999999), never a signal: a point that close to a limit or the centre is on it.
+ */
+function beyond(value: number, ref: number): number {
+  const tolerance = 1e-9 * Math.max(1, Math.abs(ref));
+  return Math.abs(value - ref) <= tolerance ? 0 : Math.sign(value - ref);
+}
+
 export function beyondLimits(points: ControlPoint[], periodName = 'points'): Signal[] {
   const one = periodName.replace(/s$/, '');
   const signals: Signal[] = [];
   for (const p of points) {
     if (p.value === null) continue;
-    const above = p.upper !== null && p.value > p.upper;
-    const below = p.lower !== null && p.value < p.lower;
+    const above = p.upper !== null && beyond(p.value, p.upper) > 0;
+    const below = p.lower !== null && beyond(p.value, p.lower) < 0;
     if (!above && !below) continue;
     signals.push({
       rule: 'beyond-limits',
@@ -47,7 +56,7 @@ export function runOfEight(
   };
   for (const p of points) {
     if (p.value === null) continue;
-    const s = Math.sign(p.value - centre);
+    const s = beyond(p.value, centre);
     if (s !== side || s === 0) close();
     side = s;
     if (s !== 0) run.push(p.index);

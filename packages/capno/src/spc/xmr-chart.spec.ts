@@ -47,4 +47,18 @@ describe('XmR (individuals) chart', () => {
   it('rejects a value that is not a number, naming the point', () => {
     expect(() => xmrChart([1, Number.NaN])).toThrow(/point 1/);
   });
+
+  it('a constant series gives no signal, even where the mean rounds off the values', () => {
+    // Twelve 0.1s: their mean in floating point is 0.09999999999999999, so every value sat a
+    // hair "above" a centre and limits that coincide (no moving range); equal values are no change.
+    for (const v of [0.1, 0.7, 123.4]) {
+      const chart = xmrChart(Array.from({ length: 12 }, () => v));
+      expect(chart.signals).toEqual([]);
+    }
+    // A real change after a constant baseline still signals.
+    const shifted = xmrChart([...Array.from({ length: 8 }, () => 0.1), 0.5], {
+      baseline: { start: 0, end: 8 },
+    });
+    expect(shifted.signals.map((s) => s.rule)).toContain('beyond-limits');
+  });
 });
