@@ -58,6 +58,23 @@ describe('properties', () => {
     );
   });
 
+  it('finds no breath in a noisy flat signal at 10 Hz (a counterexample fast-check found)', () => {
+    // 1.8 mmHg with 0.5 mmHg noise, no artefact: one unsmoothed sample crossed the threshold.
+    const s = synthCapnogram({
+      seed: 2134900721,
+      sampleRateHz: 10,
+      durationSec: 60,
+      ventilationRatePerMin: 1e-3,
+      levels: [[0, 1.8067514870288361]],
+      baselineMmHg: 1.8067514870288361,
+      compressions: [[0, 60]],
+      compressionRateHz: 1.5,
+      artefactMmHg: 0,
+      noiseMmHg: 0.5,
+    });
+    expect(detectBreaths(s.values, 10)).toEqual([]);
+  });
+
   it('finds no breath in a flat signal or in compression artefact alone', () => {
     const arb = fc.record({
       seed: fc.nat(),

@@ -56,7 +56,7 @@ export class BreathDetector {
     this.sampleRateHz = sampleRateHz;
     this.o = { ...detectorDefaults, ...options };
     const fs = sampleRateHz;
-    this.smoothN = Math.max(1, Math.round(this.o.smoothingSec * fs));
+    this.smoothN = Math.max(3, Math.round(this.o.smoothingSec * fs));
     this.hist = new Float64Array(Math.ceil(4 * fs) + this.smoothN);
     this.minExN = Math.round(this.o.minExhalationSec * fs);
     this.minInN = Math.round(this.o.minInspirationSec * fs);

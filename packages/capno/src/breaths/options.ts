@@ -17,7 +17,8 @@ export interface DetectorOptions {
   minInspirationSec: number;
   /** Slowest accepted upstroke (lower to upper threshold); slower rises move the baseline. */
   maxUpstrokeSec: number;
-  /** Width of the moving average applied before thresholds (suppresses sample noise). */
+  /** Width of the moving average applied before thresholds (suppresses sample noise); at
+   * least 3 samples, so that at low sample rates one noisy sample cannot cross a threshold. */
   smoothingSec: number;
   /** EtCO2 is the mean of this much plateau, ending `plateauGuardSec` before the downstroke. */
   plateauWindowSec: number;
