@@ -23,12 +23,29 @@ function wire(row: Row): object {
   return rest;
 }
 
+type Waiting = Record<BatchKind, Row[]>;
+
 /** Items of one kind the server has not answered for. */
-async function waitingItems(db: OfflineDb, kind: BatchKind, acked: Set<string>): Promise<Row[]> {
+async function waitingOf(db: OfflineDb, kind: BatchKind, acked: Set<string>): Promise<Row[]> {
   const table = tableOf(db, kind) as typeof db.events;
   const keys = (await table.toCollection().primaryKeys()).filter((k) => !acked.has(k));
   if (keys.length === 0) return [];
   return (await table.bulkGet(keys)).filter((r): r is LocalEvent => r !== undefined);
+}
+
+/**
+ * Every item the server has not answered for, read in one transaction: a read of the events
+ * table holds back a tap's write (in the writer worker) until it ends, so the drain makes one
+ * short read rather than one per table and step.
+ */
+function waitingItems(db: OfflineDb): Promise<Waiting> {
+  return db.transaction('r', [db.acks, db.events, db.etco2, db.waveformChunks], async () => {
+    const acked = new Set(await db.acks.toCollection().primaryKeys());
+    const [events, etco2, waveform] = await Promise.all(
+      (['events', 'etco2', 'waveform'] as const).map((kind) => waitingOf(db, kind, acked)),
+    );
+    return { events, etco2, waveform };
+  });
 }
 
 /**
@@ -82,12 +99,12 @@ async function sendItems(
   db: OfflineDb,
   transport: SyncTransport,
   kind: BatchKind,
+  waiting: Row[],
   blocked: Set<string>,
-  acked: Set<string>,
   o: SendOptions,
 ): Promise<DrainResult & { serverError: unknown }> {
   const result = { sent: 0, refused: 0, serverError: null as unknown };
-  for (const [recordId, rows] of byRecordOf(await waitingItems(db, kind, acked))) {
+  for (const [recordId, rows] of byRecordOf(waiting)) {
     if (blocked.has(recordId)) continue;
     for (let i = 0; i < rows.length; i += BATCH_SIZE) {
       const chunk = rows.slice(i, i + BATCH_SIZE);
@@ -121,9 +138,12 @@ export async function drainOutbox(
   const blocked = await sendOps(db, transport);
   const total: DrainResult = { sent: 0, refused: 0 };
   let serverError: unknown = null;
-  const acked = new Set(await db.acks.toCollection().primaryKeys());
+  const waiting = await waitingItems(db);
   for (const kind of ['events', 'etco2', 'waveform'] as const) {
-    const r = await sendItems(db, transport, kind, blocked, acked, { clockOffsetMs, bisect });
+    const r = await sendItems(db, transport, kind, waiting[kind], blocked, {
+      clockOffsetMs,
+      bisect,
+    });
     total.sent += r.sent;
     total.refused += r.refused;
     serverError ??= r.serverError;

@@ -1,4 +1,4 @@
-import { PLAUSIBLE } from '@upstroke/contracts';
+import { PLAUSIBLE, type RecordingContext } from '@upstroke/contracts';
 import { authStore } from '../auth-store';
 import { backoffDelay, type BackoffOptions } from './backoff';
 import { measureClock } from './clock';
@@ -21,6 +21,21 @@ export interface EngineState {
 
 /** Consecutive failed drains after which a batch failing with 5xx is split. */
 const BISECT_AFTER_FAILURES = 2;
+
+/**
+ * How long a clock measure (and the cached sites that come with it) serves before the next
+ * drain measures again. A drain runs every second while taps come in; a tablet's clock does
+ * not drift by seconds in a minute, and asking each time cost a request, a store write and
+ * a redraw of every screen that reads the cached sites.
+ */
+export const CLOCK_MAX_AGE_MS = 60_000;
+
+/** The cached context without its time stamp: what screens read from it. */
+function sameContext(a: unknown, b: RecordingContext): boolean {
+  if (!a || typeof a !== 'object') return false;
+  const strip = ({ serverTime: _t, ...rest }: RecordingContext) => JSON.stringify(rest);
+  return strip(a as RecordingContext) === strip(b);
+}
 
 /**
  * A tablet whose clock is further from the server's than the API accepts sends nothing: the
@@ -58,6 +73,8 @@ export class SyncEngine {
   private timers: ReturnType<typeof setTimeout>[] = [];
   private stopFns: (() => void)[] = [];
   private readonly o: Required<EngineOptions>;
+  /** The last clock measure, reused by drains for `CLOCK_MAX_AGE_MS`. */
+  private clock: { offsetMs: number; measuredAt: number } | null = null;
 
   constructor(
     private readonly db: OfflineDb,
@@ -120,12 +137,7 @@ export class SyncEngine {
   private async run(): Promise<DrainResult | null> {
     this.set({ syncing: true });
     try {
-      // Each sync measures the clock afresh and refreshes the cached sites for offline starts.
-      const { context, offsetMs } = await measureClock(() => this.transport.context(), this.o.now);
-      await this.db.meta.bulkPut([
-        { key: 'context', value: context },
-        { key: 'clock', value: { offsetMs, at: context.serverTime } },
-      ]);
+      const offsetMs = await this.clockOffset();
       checkClock(offsetMs);
       const result = (await countWaiting(this.db))
         ? await drainOutbox(
@@ -160,6 +172,26 @@ export class SyncEngine {
     }
   }
 
+  /**
+   * Tablet minus server clock, measured again when the last measure is older than
+   * `CLOCK_MAX_AGE_MS` or a drain failed since; each measure refreshes the cached sites (for
+   * offline starts), stored only when they changed so screens reading them do not redraw.
+   */
+  private async clockOffset(): Promise<number> {
+    const now = this.o.now();
+    const last = this.clock;
+    if (last && this.state.failures === 0 && now - last.measuredAt < CLOCK_MAX_AGE_MS)
+      return last.offsetMs;
+    const { context, offsetMs } = await measureClock(() => this.transport.context(), this.o.now);
+    this.clock = { offsetMs, measuredAt: now };
+    const cached = await this.db.meta.get('context');
+    await this.db.meta.bulkPut([
+      ...(sameContext(cached?.value, context) ? [] : [{ key: 'context' as const, value: context }]),
+      { key: 'clock', value: { offsetMs, at: context.serverTime } },
+    ]);
+    return offsetMs;
+  }
+
   private later(ms: number, fn: () => void) {
     this.timers.push(setTimeout(fn, ms));
   }
@@ -167,6 +199,7 @@ export class SyncEngine {
   /** Wires the triggers (browser events, interval, local writes). Returns a stop function. */
   start(): () => void {
     const onOnline = () => {
+      this.clock = null; // another network: measure again
       this.set({ online: true, failures: 0 });
       this.nextAttemptAt = 0;
       void this.syncNow(true);

@@ -31,10 +31,10 @@ export function useRemoteEntries(
   held: readonly (readonly { id: string }[])[],
 ): void {
   const { online } = useSyncExternalStore(syncEngine.subscribe, syncEngine.getState);
-  const pushed = useLiveFeed(resuscitationId, enabled && online);
-  // Read when an answer arrives (every few seconds), not on every tap.
+  // Read when an answer arrives, not on every tap.
   const heldNow = useRef(held);
   heldNow.current = held;
+  const pushed = useLiveFeed(resuscitationId, enabled && online, heldNow);
   // The next `since`, for this record only (a new record starts from the beginning).
   const since = useRef<{ id: string; at: string } | null>(null);
   useQuery({
@@ -45,8 +45,7 @@ export function useRemoteEntries(
       const answer = await apiFetch(`/resuscitations/${resuscitationId}/entries${query}`, {
         schema: (await wireSchemas()).recordEntriesSchema,
       });
-      const known = new Set(heldNow.current.flatMap((rows) => rows.map((r) => r.id)));
-      const added = await mergeRemoteEntries(offlineDb, resuscitationId, answer, known);
+      const added = await mergeRemoteEntries(offlineDb, resuscitationId, answer, idsOf(heldNow));
       const at = new Date(Date.parse(answer.serverTime) - OVERLAP_MS).toISOString();
       since.current = { id: resuscitationId, at };
       return added;
@@ -58,12 +57,20 @@ export function useRemoteEntries(
   });
 }
 
+type Held = { readonly current: readonly (readonly { id: string }[])[] };
+
+function idsOf(held: Held): Set<string> {
+  return new Set(held.current.flatMap((rows) => rows.map((r) => r.id)));
+}
+
 /**
  * The server's live feed for this record: pushed entries go straight into the store (the
  * screen's live queries redraw at once). True while subscribed; each new subscription asks
- * once for what arrived while the feed was down.
+ * once for what arrived while the feed was down. The feed also echoes this tablet's own
+ * entries once they reach the server: those the screen already holds are dropped without a
+ * store look-up (a read of the events table would hold the next tap's write back).
  */
-function useLiveFeed(resuscitationId: string, enabled: boolean): boolean {
+function useLiveFeed(resuscitationId: string, enabled: boolean, held: Held): boolean {
   const client = useQueryClient();
   const [live, setLive] = useState(false);
   useEffect(() => {
@@ -74,7 +81,8 @@ function useLiveFeed(resuscitationId: string, enabled: boolean): boolean {
     void import('./live-feed').then(({ openLiveFeed }) => {
       if (stopped) return;
       close = openLiveFeed(resuscitationId, () => authStore.get()?.accessToken ?? null, {
-        onEntries: (entries) => void mergeRemoteEntries(offlineDb, resuscitationId, entries),
+        onEntries: (entries) =>
+          void mergeRemoteEntries(offlineDb, resuscitationId, entries, idsOf(held)),
         onLive: (up) => {
           setLive(up);
           if (up)
@@ -89,6 +97,6 @@ function useLiveFeed(resuscitationId: string, enabled: boolean): boolean {
       close?.();
       setLive(false);
     };
-  }, [resuscitationId, enabled, client]);
+  }, [resuscitationId, enabled, client, held]);
   return live;
 }
