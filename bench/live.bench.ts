@@ -2,8 +2,12 @@
  * Live recording benchmark, in Chromium against the running built app, three runs unthrottled
  * and three with the CPU slowed 4× (DevTools protocol `Emulation.setCPUThrottlingRate`, a
  * mid-range tablet):
- *  - Start tap → Live usable: from the tap on Start to the ROSC button on the Live screen
- *    being enabled; target ≤ 1 s throttled;
+ *  - Start tap → Live usable: from the tap on Start (the click event, on the page's clock) to
+ *    the first frame drawn after the ROSC button of the Live screen is in the page and enabled
+ *    (found by a MutationObserver, then timed in the next requestAnimationFrame); target ≤ 1 s
+ *    throttled. Timed in the page, because Playwright's own steps (actionability checks before
+ *    the click, polling for the button after it) run in the throttled page too and added
+ *    0.3–0.4 s that no user waits for; that driver's-eye figure is kept as `driverMs`;
  *  - tap → IndexedDB commit: 200 taps on the Live screen per run, timed by the app's own User
  *    Timing entry `upstroke:tap-commit`: from the tap handler's start to the moment the
  *    transaction completed in the tap-writer worker (its completion time, read on the
@@ -57,8 +61,29 @@ const rawWrites = `async (n) => {
   return out;
 }`;
 
+/**
+ * In the page: the time of the click on Start and of the first frame after the ROSC button of
+ * Live is there and enabled (a string, so that no transpiler helper reaches the page).
+ */
+const usableProbe = `
+  window.__startTap = null; window.__usableAt = null;
+  document.addEventListener('click', (e) => {
+    const b = e.target instanceof Element ? e.target.closest('button') : null;
+    if (b && b.textContent.trim() === 'Start' && window.__startTap === null) window.__startTap = e.timeStamp;
+  }, true);
+  const seen = () => [...document.querySelectorAll('button')].some((b) => b.textContent === 'ROSC' && !b.disabled);
+  new MutationObserver((_, obs) => {
+    if (window.__startTap === null || !location.pathname.startsWith('/live/') || !seen()) return;
+    obs.disconnect();
+    requestAnimationFrame(() => { window.__usableAt = performance.now(); });
+  }).observe(document, { subtree: true, childList: true, attributes: true });
+`;
+
 /** Signs in, taps Start; returns the record id and the time until Live is usable. */
-async function startCode(page: Page): Promise<{ id: string; startToUsableMs: number }> {
+async function startCode(
+  page: Page,
+): Promise<{ id: string; startToUsableMs: number; driverMs: number }> {
+  await page.addInitScript(usableProbe);
   await page.goto(`${baseUrl}/sign-in`);
   await page.getByLabel('Email').fill('recorder@kestrel.test');
   await page.getByLabel('Password').fill('upstroke-demo');
@@ -68,10 +93,12 @@ async function startCode(page: Page): Promise<{ id: string; startToUsableMs: num
   const t0 = performance.now();
   await start.click();
   await page.getByRole('button', { name: 'ROSC', exact: true }).waitFor();
-  const startToUsableMs = performance.now() - t0;
+  const driverMs = performance.now() - t0;
+  await page.waitForFunction('window.__usableAt !== null');
+  const startToUsableMs = (await page.evaluate('window.__usableAt - window.__startTap')) as number;
   await page.waitForURL(/\/live\/[0-9a-f-]{36}$/);
   await page.getByRole('status', { name: 'Sync: All saved' }).waitFor({ timeout: 30_000 });
-  return { id: page.url().split('/').pop() as string, startToUsableMs };
+  return { id: page.url().split('/').pop() as string, startToUsableMs, driverMs };
 }
 
 /** One run: a fresh page at the given CPU slow-down, Start, then the taps. */
@@ -80,7 +107,7 @@ async function run(browser: Browser, rate: number) {
   const page = await context.newPage();
   const cdp = await context.newCDPSession(page);
   await cdp.send('Emulation.setCPUThrottlingRate', { rate });
-  const { id, startToUsableMs } = await startCode(page);
+  const { id, startToUsableMs, driverMs } = await startCode(page);
   for (let i = 0; i < TAPS; i++)
     await page.getByRole('button', { name: i % 2 ? 'Re-arrest' : 'ROSC', exact: true }).click();
   const durations = (await page.evaluate(
@@ -90,6 +117,7 @@ async function run(browser: Browser, rate: number) {
   const figures = {
     cpuSlowdown: rate,
     startToUsableMs: Math.round(startToUsableMs),
+    driverMs: Math.round(driverMs),
     taps: durations.length,
     p50Ms: Number(percentile(sorted, 50).toFixed(2)),
     p95Ms: Number(percentile(sorted, 95).toFixed(2)),

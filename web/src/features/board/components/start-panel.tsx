@@ -1,5 +1,5 @@
-import { Button, MenuItem, Paper, Stack, TextField } from '@mui/material';
-import { useState } from 'react';
+import { Alert, Button, MenuItem, Paper, Stack, TextField } from '@mui/material';
+import { useRef, useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { startResuscitation } from '../../../lib/offline';
 import { useRecordingContext } from '../hooks/use-recording-context';
@@ -8,13 +8,23 @@ import { useRecordingContext } from '../hooks/use-recording-context';
 export function StartPanel() {
   const navigate = useNavigate();
   const { sites, siteId, unitId, setChoice } = useRecordingContext();
-  const [busy, setBusy] = useState(false);
+  // A second tap while the first is stored starts nothing (a ref: no redraw before Live).
+  const starting = useRef(false);
+  const [error, setError] = useState<string | null>(null);
   const site = sites.find((s) => s.id === siteId);
   const start = async () => {
-    if (!siteId) return;
-    setBusy(true);
-    const record = await startResuscitation({ siteId, unitId });
-    void navigate(`/live/${record.id}`);
+    if (!siteId || starting.current) return;
+    starting.current = true;
+    try {
+      const record = await startResuscitation({ siteId, unitId });
+      // Live draws the new record from this at once instead of reading it back first.
+      void navigate(`/live/${record.id}`, { state: { started: record } });
+    } catch (e) {
+      starting.current = false;
+      setError(
+        `The code could not be stored on this tablet (${e instanceof Error ? e.message : String(e)}). Tap Start again; if it fails again, record on paper and tell the administrator.`,
+      );
+    }
   };
   return (
     <Paper variant="outlined" sx={{ p: 2 }}>
@@ -26,7 +36,7 @@ export function StartPanel() {
         <Button
           variant="contained"
           color="secondary"
-          disabled={!siteId || busy}
+          disabled={!siteId}
           onClick={() => void start()}
           sx={{ minHeight: 96, minWidth: 240, fontSize: '2rem' }}
         >
@@ -64,6 +74,11 @@ export function StartPanel() {
           </TextField>
         )}
       </Stack>
+      {error && (
+        <Alert severity="error" sx={{ mt: 2 }} onClose={() => setError(null)}>
+          {error}
+        </Alert>
+      )}
     </Paper>
   );
 }

@@ -2,8 +2,10 @@ import { useQuery } from '@tanstack/react-query';
 import { type Resuscitation, type Thresholds, thresholdDefaults } from '@upstroke/contracts';
 import { useLiveQuery } from 'dexie-react-hooks';
 import { useEffect, useMemo } from 'react';
+import { useLocation } from 'react-router-dom';
 import { apiFetch } from '../../../lib/api-client';
 import {
+  type LocalResuscitation,
   offlineDb,
   type SyncAck,
   useRecordRows,
@@ -17,7 +19,13 @@ import {
  * while online, what other tablets record for it is brought in every few seconds.
  */
 export function useLiveRecord(id: string) {
-  const record = useLiveQuery(() => offlineDb.resuscitations.get(id), [id], null);
+  // Just started on the Board: drawn from what Start stored, while the store is read.
+  const started = (useLocation().state as { started?: LocalResuscitation } | null)?.started;
+  const record = useLiveQuery(
+    () => offlineDb.resuscitations.get(id),
+    [id],
+    started?.id === id ? started : null,
+  );
   // Events and typed values are append-only: after a commit only the new rows are read.
   const events = useRecordRows(offlineDb.events, id);
   const etco2 = useRecordRows(offlineDb.etco2, id);
