@@ -1,5 +1,6 @@
 import type { LocalEtco2, LocalEvent, LocalWaveformChunk, OfflineDb, SyncAck } from './db';
-import { deliver, type Delivery, messageOf } from './send-batch';
+import { arrestTimeProblem } from '@upstroke/contracts';
+import { ClockRefusedError, deliver, type Delivery, messageOf } from './send-batch';
 import { type BatchKind, isPermanent, type SyncTransport } from './transport';
 
 type Row = LocalEvent | LocalEtco2 | LocalWaveformChunk;
@@ -49,11 +50,32 @@ function waitingItems(db: OfflineDb): Promise<Waiting> {
 }
 
 /**
+ * A record start the server would refuse as an arrest in the future because this tablet's
+ * clock is ahead (by more than the hour the API allows, less than the day beyond which the
+ * engine holds everything): the start waits, with the clock message, instead of being
+ * refused for good as if the time had been typed wrong.
+ */
+function checkStartClock(body: Record<string, unknown>, clockOffsetMs?: number): void {
+  if (!clockOffsetMs || typeof body.arrestAt !== 'string') return;
+  const serverNow = Date.now() - clockOffsetMs;
+  if (arrestTimeProblem(body.arrestAt, serverNow) === null) return;
+  if (arrestTimeProblem(body.arrestAt, Date.now()) !== null) return; // wrong whatever the clock
+  const hours = Math.max(1, Math.round(Math.abs(clockOffsetMs) / 3_600_000));
+  throw new ClockRefusedError(
+    `This tablet's clock is ${hours} h ${clockOffsetMs > 0 ? 'ahead of' : 'behind'} the server's, so the code's start would be refused: check the tablet's date and time. Entries are kept on the tablet.`,
+  );
+}
+
+/**
  * Record-level operations in the order they were made. A transient failure stops the drain
  * (so a patch never overtakes its create); a permanent refusal is kept with its reason.
  * Returns the records whose create has not reached the server: their items must wait.
  */
-async function sendOps(db: OfflineDb, transport: SyncTransport): Promise<Set<string>> {
+async function sendOps(
+  db: OfflineDb,
+  transport: SyncTransport,
+  clockOffsetMs?: number,
+): Promise<Set<string>> {
   const blocked = new Set<string>();
   for (const op of await db.outbox.orderBy('seq').toArray()) {
     if (op.failed || blocked.has(op.resuscitationId)) {
@@ -61,8 +83,10 @@ async function sendOps(db: OfflineDb, transport: SyncTransport): Promise<Set<str
       continue;
     }
     try {
-      if (op.op === 'create') await transport.create(op.body);
-      else await transport.patch(op.resuscitationId, op.body);
+      if (op.op === 'create') {
+        checkStartClock(op.body, clockOffsetMs);
+        await transport.create(op.body);
+      } else await transport.patch(op.resuscitationId, op.body);
       await db.outbox.delete(op.seq as number);
     } catch (error) {
       if (!isPermanent(error)) throw error;
@@ -135,7 +159,7 @@ export async function drainOutbox(
   clockOffsetMs?: number,
   bisect = false,
 ): Promise<DrainResult> {
-  const blocked = await sendOps(db, transport);
+  const blocked = await sendOps(db, transport, clockOffsetMs);
   const total: DrainResult = { sent: 0, refused: 0 };
   let serverError: unknown = null;
   const waiting = await waitingItems(db);

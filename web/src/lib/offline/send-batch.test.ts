@@ -100,7 +100,8 @@ describe('one bad item never stalls the outbox', () => {
     expect(engine.getState().clockRefused).toMatch(/date and time/);
     expect(await db.acks.count()).toBe(0);
     expect(await countRefused(db)).toBe(0);
-    expect(await countWaiting(db)).toBe(4);
+    // The record start waits too (its arrest would be in the future on the server's clock).
+    expect(await countWaiting(db)).toBe(5);
   });
 
   it('sends not even the record start while the tablet clock is beyond what the server takes', async () => {
@@ -122,6 +123,22 @@ describe('one bad item never stalls the outbox', () => {
     expect(engine.getState().clockRefused).toBeNull();
     expect(server.records.size).toBe(1);
     expect(server.stored.events.size).toBe(2);
+  });
+
+  it('holds a record start with the clock message when the tablet is 2 h ahead (the API would refuse its arrest as in the future)', async () => {
+    await notes(2);
+    server.clockSkewMs = 2 * 3_600_000; // tablet 2 h ahead: within the day the API takes
+    const engine = new SyncEngine(db, server, { isOnline: () => true, hasSession: () => true });
+    expect(await engine.syncNow()).toBeNull();
+    engine.stop();
+    expect(engine.getState().clockRefused).toMatch(
+      /2 h ahead of the server's, so the code's start would be refused: check the tablet's date and time/,
+    );
+    expect(server.calls).toEqual([]);
+    // Waiting, not refused: nothing is marked failed, everything is still to send.
+    expect(await db.outbox.filter((op) => Boolean(op.failed)).count()).toBe(0);
+    expect(await countRefused(db)).toBe(0);
+    expect(await countWaiting(db)).toBe(3);
   });
 
   it('lets a lead discard refused entries with a reason: told to the server, kept here', async () => {
