@@ -72,15 +72,23 @@ describe('quality committee: control charts and the funnel plot', () => {
     await page
       .getByRole('option', { name: monthName(lastMonthBeforeImprovement()), exact: true })
       .click();
+    // The chart keeps the previous answer on screen while the new baseline's is fetched:
+    // wait for the caption naming the chosen baseline before reading the signals.
+    await page
+      .getByText(new RegExp(`Baseline .* to ${monthName(lastMonthBeforeImprovement())}\\.`))
+      .first()
+      .waitFor();
     const signals = page.getByRole('list', { name: 'Signals' });
     const first = signals.getByRole('listitem').first();
     await first.waitFor();
     assert.match(await first.innerText(), /above the upper control limit/);
     // The month is written in words; its key ("2026-06") rides along for comparing.
-    const strong = first.locator('strong');
-    const month = (await strong.getAttribute('data-month')) ?? '';
+    // Key and words read together, from the same element.
+    const [month, words] = await first
+      .locator('strong')
+      .evaluate((el) => [el.getAttribute('data-month') ?? '', (el.textContent ?? '').trim()]);
     assert.ok(month > lastMonthBeforeImprovement(), 'the signal comes after the baseline');
-    assert.equal((await strong.innerText()).trim(), monthName(month));
+    assert.equal(words, monthName(month));
     assert.match(
       await page
         .getByText(/Nelson 1984/)

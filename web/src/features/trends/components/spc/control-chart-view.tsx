@@ -1,4 +1,4 @@
-import { MenuItem, TextField } from '@mui/material';
+import { Box, LinearProgress, MenuItem, TextField } from '@mui/material';
 import { type SpcMeasure, spcMeasureLabels, type TrendsFilter } from '@upstroke/contracts';
 import { useState } from 'react';
 import { ErrorState, Loading } from '../../../../components/ui/states';
@@ -68,9 +68,18 @@ export function ControlChartView({
             onChange={setBaseline}
             monthName={month}
           />
-          <ControlChartCanvas chart={chart.data} title={title} onPoint={open} monthName={month} />
-          <SignalsList chart={chart.data} monthName={month} />
-          <ControlPointsTable chart={chart.data} title={title} onPoint={open} monthName={month} />
+          {/* The previous chart stays while the new baseline's is fetched: say so. */}
+          {chart.isPlaceholderData && (
+            <LinearProgress aria-label="Updating the control chart" sx={{ my: 0.5 }} />
+          )}
+          <Box
+            aria-busy={chart.isPlaceholderData}
+            sx={{ opacity: chart.isPlaceholderData ? 0.6 : 1 }}
+          >
+            <ControlChartCanvas chart={chart.data} title={title} onPoint={open} monthName={month} />
+            <SignalsList chart={chart.data} monthName={month} />
+            <ControlPointsTable chart={chart.data} title={title} onPoint={open} monthName={month} />
+          </Box>
         </>
       )}
       <PointRecordsDialog point={point} onClose={() => setPoint(null)} />
