@@ -233,6 +233,7 @@ export class SyncEngine {
   }
 
   stop() {
+    this.clock = null; // a restarted engine (another user signs in) measures again
     this.stopFns.forEach((f) => f());
     this.stopFns = [];
     this.timers.forEach(clearTimeout);
