@@ -1,4 +1,12 @@
-import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import {
+  type Browser,
+  type BrowserContext,
+  chromium,
+  type Locator,
+  type Page,
+} from 'playwright-core';
 import { baseUrl, type DemoRole, demoPassword, emailOf } from './env';
 
 /**
@@ -45,4 +53,32 @@ export async function signIn(page: Page, role: DemoRole): Promise<void> {
   await page.getByLabel('Password').fill(demoPassword);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByRole('button', { name: 'Sign out' }).waitFor();
+}
+
+/**
+ * Waits for `locator`; when it does not come, keeps the screen under e2e/artifacts
+ * (`<name>.png`) and fails with what the page showed and which API calls it had made,
+ * so that a failure seen only on a busy machine can be read afterwards.
+ */
+export async function waitOrExplain(
+  page: Page,
+  locator: Locator,
+  name: string,
+  timeout = 30_000,
+): Promise<void> {
+  try {
+    await locator.waitFor({ timeout });
+  } catch (error) {
+    const artifacts = path.resolve(__dirname, '..', 'artifacts');
+    mkdirSync(artifacts, { recursive: true });
+    await page.screenshot({ path: path.join(artifacts, `${name}.png`), fullPage: true });
+    const shown = await page.locator('body').innerText();
+    const calls = (await page.evaluate(
+      "performance.getEntriesByType('resource').filter((r) => r.name.includes('/api/')).slice(-8).map((r) => `${r.name.replace(/^.*\\/api/, '/api')} ${Math.round(r.duration)} ms`)",
+    )) as string[];
+    throw new Error(
+      `${name}: not shown within ${timeout} ms. Last API calls: ${calls.join(', ')}. The page showed:\n${shown}`,
+      { cause: error },
+    );
+  }
 }
