@@ -18,7 +18,7 @@ import {
   roleSchema,
   type Site,
 } from '@upstroke/contracts';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { useInviteUser } from '../api/invite-user';
@@ -39,12 +39,20 @@ export function UserDialog({ user, sites, onClose, onDone }: Props) {
   const invite = useInviteUser();
   const update = useUpdateUser();
   const reset = useResetPassword();
-  const { register, control, handleSubmit, formState } = useForm<InviteUser>({
+  const onlySite = sites.length === 1 ? sites[0].id : null;
+  const { register, control, handleSubmit, formState, setValue } = useForm<InviteUser>({
     resolver: zodResolver(inviteUserSchema),
     defaultValues: user
       ? { email: user.email, name: user.name, role: user.role, siteIds: user.siteIds }
-      : { email: '', name: '', role: 'recorder', siteIds: sites.length === 1 ? [sites[0].id] : [] },
+      : { email: '', name: '', role: 'recorder', siteIds: onlySite ? [onlySite] : [] },
   });
+  // The site list may arrive after the form opened (a slow network): the only site is then
+  // ticked as it would have been, unless the admin has touched the sites already.
+  const sitesTouched = Boolean(formState.dirtyFields.siteIds);
+  useEffect(() => {
+    if (!user && onlySite && !sitesTouched)
+      setValue('siteIds', [onlySite], { shouldValidate: true });
+  }, [user, onlySite, sitesTouched, setValue]);
   const [confirming, setConfirming] = useState(false);
   const failed = [invite, update, reset].find((m) => m.isError);
   const busy = invite.isPending || update.isPending || reset.isPending;
