@@ -1,6 +1,6 @@
 import type { LocalEtco2, LocalEvent, LocalWaveformChunk, OfflineDb, SyncAck } from './db';
 import { arrestTimeProblem } from '@upstroke/contracts';
-import { ClockRefusedError, deliver, type Delivery, messageOf } from './send-batch';
+import { clockRefusal, deliver, type Delivery, messageOf } from './send-batch';
 import { type BatchKind, isPermanent, type SyncTransport } from './transport';
 
 type Row = LocalEvent | LocalEtco2 | LocalWaveformChunk;
@@ -60,10 +60,7 @@ function checkStartClock(body: Record<string, unknown>, clockOffsetMs?: number):
   const serverNow = Date.now() - clockOffsetMs;
   if (arrestTimeProblem(body.arrestAt, serverNow) === null) return;
   if (arrestTimeProblem(body.arrestAt, Date.now()) !== null) return; // wrong whatever the clock
-  const hours = Math.max(1, Math.round(Math.abs(clockOffsetMs) / 3_600_000));
-  throw new ClockRefusedError(
-    `This tablet's clock is ${hours} h ${clockOffsetMs > 0 ? 'ahead of' : 'behind'} the server's, so the code's start would be refused: check the tablet's date and time. Entries are kept on the tablet.`,
-  );
+  throw clockRefusal(clockOffsetMs, ", so the code's start would be refused");
 }
 
 /**

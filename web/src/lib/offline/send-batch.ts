@@ -8,6 +8,17 @@ export const CLOCK_OFFSET_HEADER = 'X-Clock-Offset-Ms';
 /** The server refused this tablet's clock: nothing was stored; the entries wait for a fix. */
 export class ClockRefusedError extends Error {}
 
+/**
+ * The refusal the recorder reads for a tablet `offsetMs` off the server's clock (tablet minus
+ * server), with what it stops (`because`, e.g. ", so the code's start would be refused").
+ */
+export function clockRefusal(offsetMs: number, because = ''): ClockRefusedError {
+  const hours = Math.max(1, Math.round(Math.abs(offsetMs) / 3_600_000));
+  return new ClockRefusedError(
+    `This tablet's clock is ${hours} h ${offsetMs > 0 ? 'ahead of' : 'behind'} the server's${because}: check the tablet's date and time. Entries are kept on the tablet.`,
+  );
+}
+
 export function messageOf(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }

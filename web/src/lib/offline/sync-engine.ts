@@ -4,7 +4,7 @@ import { backoffDelay, type BackoffOptions } from './backoff';
 import { measureClock } from './clock';
 import { type OfflineDb } from './db';
 import { countWaiting, drainOutbox, type DrainResult } from './outbox';
-import { ClockRefusedError } from './send-batch';
+import { clockRefusal, ClockRefusedError } from './send-batch';
 import type { SyncTransport } from './transport';
 import { writeSignal } from './write-signal';
 
@@ -43,11 +43,7 @@ function sameContext(a: unknown, b: RecordingContext): boolean {
  * arrest in the future), so the entries wait on the tablet until its time is fixed.
  */
 function checkClock(offsetMs: number): void {
-  if (Math.abs(offsetMs) <= PLAUSIBLE.clockOffsetMs) return;
-  const hours = Math.round(Math.abs(offsetMs) / 3_600_000);
-  throw new ClockRefusedError(
-    `This tablet's clock is ${hours} h ${offsetMs > 0 ? 'ahead of' : 'behind'} the server's: check the tablet's date and time. Entries are kept on the tablet.`,
-  );
+  if (Math.abs(offsetMs) > PLAUSIBLE.clockOffsetMs) throw clockRefusal(offsetMs);
 }
 
 export interface EngineOptions {
