@@ -55,6 +55,9 @@ export async function signIn(page: Page, role: DemoRole): Promise<void> {
   await page.getByRole('button', { name: 'Sign out' }).waitFor();
 }
 
+/** Screenshots for people to read (git-ignored): the accessibility pass and failed waits. */
+export const artifactsDir = path.resolve(__dirname, '..', 'artifacts');
+
 /**
  * Waits for `locator`; when it does not come, keeps the screen under e2e/artifacts
  * (`<name>.png`) and fails with what the page showed and which API calls it had made,
@@ -69,9 +72,8 @@ export async function waitOrExplain(
   try {
     await locator.waitFor({ timeout });
   } catch (error) {
-    const artifacts = path.resolve(__dirname, '..', 'artifacts');
-    mkdirSync(artifacts, { recursive: true });
-    await page.screenshot({ path: path.join(artifacts, `${name}.png`), fullPage: true });
+    mkdirSync(artifactsDir, { recursive: true });
+    await page.screenshot({ path: path.join(artifactsDir, `${name}.png`), fullPage: true });
     const shown = await page.locator('body').innerText();
     const calls = (await page.evaluate(
       "performance.getEntriesByType('resource').filter((r) => r.name.includes('/api/')).slice(-8).map((r) => `${r.name.replace(/^.*\\/api/, '/api')} ${Math.round(r.duration)} ms`)",

@@ -5,13 +5,12 @@ import path from 'node:path';
 import { after, before, describe, it } from 'node:test';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import pg from 'pg';
-import { launchBrowser, newTabletContext, signIn } from '../support/browser';
+import { artifactsDir, launchBrowser, newTabletContext, signIn } from '../support/browser';
 import { databaseUrl, type DemoRole } from '../support/env';
 
 // Every screen in both themes at the tablet's size and a phone's (390×844, a common phone's
 // CSS viewport): axe (WCAG 2.x rules, colour contrast included) must find nothing serious or
 // critical; a screenshot of each is kept for people to review (git-ignored).
-const artifacts = path.resolve(__dirname, '..', 'artifacts');
 const sizes = [
   { name: 'tablet', width: 1280, height: 800 },
   { name: 'phone', width: 390, height: 844 },
@@ -125,7 +124,7 @@ async function check(page: Page, screen: Screen, theme: Theme): Promise<string[]
             .join(', ')}${v.nodes[0]?.failureSummary ? ` — ${v.nodes[0].failureSummary}` : ''}`,
         );
     await page.screenshot({
-      path: path.join(artifacts, `${screen.name}-${theme}-${size.name}.png`),
+      path: path.join(artifactsDir, `${screen.name}-${theme}-${size.name}.png`),
       fullPage: true,
     });
   }
@@ -138,7 +137,7 @@ describe('accessibility: axe in both themes at tablet and phone sizes', () => {
   let debriefId: string;
   const contexts: BrowserContext[] = [];
   before(async () => {
-    mkdirSync(artifacts, { recursive: true });
+    mkdirSync(artifactsDir, { recursive: true });
     ({ browser, close } = await launchBrowser());
     debriefId = await fullestRecord();
   });
