@@ -102,7 +102,9 @@ describe('Live follows the patient', () => {
   it('Re-arrest brings the arrest prompts and timers back', async () => {
     await seed(arrestThenRosc());
     renderLive();
-    await userEvent.click(await screen.findByRole('button', { name: 'Re-arrest' }));
+    // The button is there (disabled) before the record's entries are read: wait for ROSC.
+    await screen.findByRole('timer', { name: 'ROSC for' });
+    await userEvent.click(screen.getByRole('button', { name: 'Re-arrest' }));
     const prompts = await screen.findByRole('status', { name: 'Prompts' });
     // The last epinephrine was 10 min ago: past the site's 3-min interval (AHA 2020, summary).
     expect(await within(prompts).findByText(/Epinephrine interval reached/)).toBeInTheDocument();
