@@ -12,6 +12,7 @@ import { ensureDependencies } from './lib/deps.mjs';
 import { freePort } from './lib/ports.mjs';
 import { ensureDatabase, startCluster } from './lib/postgres.mjs';
 import { log, runAsync } from './lib/run.mjs';
+import { settle } from './lib/settle.mjs';
 import { waitForHttp } from './lib/wait.mjs';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -72,7 +73,11 @@ async function main() {
     .sort();
   const failed = [];
   for (const file of files) {
-    log(`── bench/${file}`);
+    // The build, the server's worker threads and PostgreSQL settle before each timing.
+    const quiet = await settle();
+    log(
+      `── bench/${file} (CPUs ${Math.round((quiet.idleShare ?? 1) * 100)} % idle after ${quiet.waitedMs} ms)`,
+    );
     const code = await runAsync('npx', ['tsx', path.join('bench', file)], {
       cwd: root,
       env: {
@@ -80,6 +85,7 @@ async function main() {
         NODE_OPTIONS: '--conditions=upstroke-source',
         BENCH_BASE_URL: `http://localhost:${appPort}`,
         BENCH_DATABASE_URL: databaseUrl,
+        BENCH_IDLE_SHARE: String(quiet.idleShare ?? ''),
       },
     });
     if (code !== 0) failed.push(file);

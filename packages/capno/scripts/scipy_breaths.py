@@ -3,7 +3,8 @@
 
 Reads JSON on stdin: {"values": [mmHg...], "sampleRateHz": fs, "repeat": n (optional)}.
 Prints JSON: {"breaths": [{"tSec", "etco2MmHg"}], "computeSec": median seconds per run,
-"cpuSec": median CPU seconds of the process per run}.
+"cpuSec": median CPU seconds of the process per run, "runsSec": every run's seconds,
+"cpuRunsSec": every run's CPU seconds}.
 
 Method (SciPy only, no shared code with the TypeScript engine): smooth with a 0.1 s moving
 average; scipy.signal.find_peaks with prominence >= 3 mmHg, width >= 0.6 s at half
@@ -56,7 +57,13 @@ def main():
         breaths = detect(values, fs)
         runs.append(time.perf_counter() - t0)
         cpu.append(time.process_time() - c0)
-    out = {"breaths": breaths, "computeSec": float(np.median(runs)), "cpuSec": float(np.median(cpu))}
+    out = {
+        "breaths": breaths,
+        "computeSec": float(np.median(runs)),
+        "cpuSec": float(np.median(cpu)),
+        "runsSec": runs,
+        "cpuRunsSec": cpu,
+    }
     json.dump(out, sys.stdout)
 
 

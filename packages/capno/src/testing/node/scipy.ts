@@ -17,6 +17,9 @@ export interface ScipyResult {
   computeSec: number;
   /** Median CPU time of the process per run (what a run costs, whatever the machine's load). */
   cpuSec: number;
+  /** Every run's wall and CPU seconds, in order. */
+  runsSec: number[];
+  cpuRunsSec: number[];
 }
 
 /** Runs scripts/scipy_breaths.py on a signal (mmHg) and returns its breaths. */
