@@ -27,6 +27,7 @@ import { monitoringOf, runSpan, waveformRuns } from './waveform/runs.js';
 export interface CoreInput {
   thresholds: Thresholds;
   events: readonly TimedEvent[];
+  /** EtCO2 values and breaths, each sorted by time. */
   points: readonly Etco2Point[];
   breaths: readonly Breath[];
   waveformCoverage: readonly Interval[];
@@ -51,16 +52,30 @@ export function lookbackSec(t: Thresholds): number {
   );
 }
 
-function tailFrom<T extends { tSec: number }>(xs: readonly T[], from: number): readonly T[] {
-  if (from === -Infinity) return xs;
+/** In a time-sorted list, the index of the first item with `tSec` ≥ `t` (`after`: > `t`). */
+function firstAt(xs: readonly { tSec: number }[], t: number, after = false): number {
   let lo = 0;
   let hi = xs.length;
   while (lo < hi) {
     const mid = (lo + hi) >> 1;
-    if (xs[mid].tSec < from) lo = mid + 1;
+    if (xs[mid].tSec < t || (after && xs[mid].tSec === t)) lo = mid + 1;
     else hi = mid;
   }
-  return xs.slice(lo);
+  return lo;
+}
+
+/** The items of a time-sorted list from `from` on. */
+function tailFrom<T extends { tSec: number }>(xs: readonly T[], from: number): readonly T[] {
+  return from === -Infinity ? xs : xs.slice(firstAt(xs, from));
+}
+
+/**
+ * The items of a time-sorted list up to `end` (inclusive); the list itself when nothing is
+ * later, as in every live refresh (no copy of the whole record each second).
+ */
+function headTo<T extends { tSec: number }>(xs: readonly T[], end: number): readonly T[] {
+  if (xs.length === 0 || xs[xs.length - 1].tSec <= end) return xs;
+  return xs.slice(0, firstAt(xs, end, true));
 }
 
 /**
@@ -89,8 +104,8 @@ export function analyzeCore(core: CoreInput): AnalysisOutput {
   const measures = eventMeasures(c.events, tl, from);
   const monitoring = monitoringOf(c.waveformCoverage, end);
   // Values after the end of the record (e.g. monitor still running) are not part of it.
-  const points = c.points.filter((p) => p.tSec <= end);
-  const breaths = c.breaths.filter((b) => b.tSec <= end);
+  const points = headTo(c.points, end);
+  const breaths = headTo(c.breaths, end);
   const full = from === -Infinity;
   const segments = full ? stepSegments(points, end, monitoring.dataGaps) : [];
   const cut = from - lookbackSec(c.thresholds);
@@ -127,7 +142,8 @@ export function analyzeCore(core: CoreInput): AnalysisOutput {
         : { medianMmHg: null, fractionAtOrAbove10: null, fractionAtOrAbove20: null },
     },
     findings,
-    breaths,
+    // A copy: the caller owns its output (the input may be a live detector's own list).
+    breaths: breaths.slice(),
   };
 }
 

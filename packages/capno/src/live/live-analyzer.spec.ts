@@ -67,4 +67,20 @@ describe('LiveAnalyzer', () => {
     expect(live.breaths.every((b) => b.tSec < 60 || b.tSec >= 100)).toBe(true);
     expect(live.breaths.filter((b) => b.tSec >= 100).length).toBeGreaterThan(4);
   });
+
+  it('a snapshot up to a time leaves out later breaths and values, and its breaths are a copy', () => {
+    const live = new LiveAnalyzer({ arrestAt: at(0), sampleRateHz: 50, unit: 'mmHg' });
+    feed(live, 200);
+    live.pushEtco2({ at: at(150), value: 25, unit: 'mmHg', source: 'manual' });
+    const all = live.breaths.length;
+    const cut = live.snapshot(100);
+    const later = live.breaths.filter((b) => b.tSec > 100).length;
+    expect(later).toBeGreaterThan(5);
+    expect(cut.breaths).toEqual(live.breaths.filter((b) => b.tSec <= 100));
+    const whole = live.snapshot();
+    expect(whole.breaths).toHaveLength(all);
+    whole.breaths.length = 0; // the caller's copy: the analyzer keeps its own breaths
+    expect(live.breaths).toHaveLength(all);
+    expect(live.snapshot(100).findings).toEqual(cut.findings);
+  });
 });
