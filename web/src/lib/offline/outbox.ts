@@ -1,22 +1,10 @@
-import type { LocalEtco2, LocalEvent, LocalWaveformChunk, OfflineDb, SyncAck } from './db';
+import type { OfflineDb, SyncAck } from './db';
 import { arrestTimeProblem } from '@upstroke/contracts';
 import { clockRefusal, deliver, type Delivery, messageOf } from './send-batch';
+import { type Row, type Unsent, unsentItems } from './store-reads';
 import { type BatchKind, isPermanent, type SyncTransport } from './transport';
 
-type Row = LocalEvent | LocalEtco2 | LocalWaveformChunk;
-
 export const BATCH_SIZE = 500;
-
-export interface DrainResult {
-  sent: number;
-  refused: number;
-}
-
-function tableOf(db: OfflineDb, kind: BatchKind) {
-  if (kind === 'events') return db.events;
-  if (kind === 'etco2') return db.etco2;
-  return db.waveformChunks;
-}
 
 /** The item as the API takes it: the record id is in the path. */
 function wire(row: Row): object {
@@ -24,29 +12,9 @@ function wire(row: Row): object {
   return rest;
 }
 
-type Waiting = Record<BatchKind, Row[]>;
-
-/** Items of one kind the server has not answered for. */
-async function waitingOf(db: OfflineDb, kind: BatchKind, acked: Set<string>): Promise<Row[]> {
-  const table = tableOf(db, kind) as typeof db.events;
-  const keys = (await table.toCollection().primaryKeys()).filter((k) => !acked.has(k));
-  if (keys.length === 0) return [];
-  return (await table.bulkGet(keys)).filter((r): r is LocalEvent => r !== undefined);
-}
-
-/**
- * Every item the server has not answered for, read in one transaction: a read of the events
- * table holds back a tap's write (in the writer worker) until it ends, so the drain makes one
- * short read rather than one per table and step.
- */
-function waitingItems(db: OfflineDb): Promise<Waiting> {
-  return db.transaction('r', [db.acks, db.events, db.etco2, db.waveformChunks], async () => {
-    const acked = new Set(await db.acks.toCollection().primaryKeys());
-    const [events, etco2, waveform] = await Promise.all(
-      (['events', 'etco2', 'waveform'] as const).map((kind) => waitingOf(db, kind, acked)),
-    );
-    return { events, etco2, waveform };
-  });
+export interface DrainResult {
+  sent: number;
+  refused: number;
 }
 
 /**
@@ -149,17 +117,21 @@ async function sendItems(
   return result;
 }
 
-/** Sends everything waiting: creates and patches first, then events, EtCO2 values, waveform. */
+/**
+ * Sends everything waiting: creates and patches first, then events, EtCO2 values, waveform.
+ * `readUnsent` reads the waiting items (the app passes the tap writer's worker; see `StoreRead`).
+ */
 export async function drainOutbox(
   db: OfflineDb,
   transport: SyncTransport,
   clockOffsetMs?: number,
   bisect = false,
+  readUnsent: () => Promise<Unsent> = () => unsentItems(db),
 ): Promise<DrainResult> {
   const blocked = await sendOps(db, transport, clockOffsetMs);
   const total: DrainResult = { sent: 0, refused: 0 };
   let serverError: unknown = null;
-  const waiting = await waitingItems(db);
+  const waiting = await readUnsent();
   for (const kind of ['events', 'etco2', 'waveform'] as const) {
     const r = await sendItems(db, transport, kind, waiting[kind], blocked, {
       clockOffsetMs,
@@ -173,24 +145,8 @@ export async function drainOutbox(
   return total;
 }
 
-/**
- * How many writes wait for the server (records, events, values, chunks): items are never
- * deleted and each has at most one answer, so what waits is the items less the answers.
- */
-export function countWaiting(db: OfflineDb): Promise<number> {
-  // One read transaction for the five counts: fewer transactions for a tap's write to queue behind.
-  const tables = [db.outbox, db.events, db.etco2, db.waveformChunks, db.acks];
-  return db.transaction('r', tables, async () => {
-    const [ops, events, etco2, chunks, answered] = await Promise.all([
-      db.outbox.filter((o) => !o.failed).count(),
-      db.events.count(),
-      db.etco2.count(),
-      db.waveformChunks.count(),
-      db.acks.count(),
-    ]);
-    return ops + events + etco2 + chunks - answered;
-  });
-}
+// Read by the sync badge through the tap writer's worker; defined beside the other such reads.
+export { countWaiting } from './store-reads';
 
 /** Record writes the server refused for good (kept, with the reason, until sent again). */
 export function failedOps(db: OfflineDb) {

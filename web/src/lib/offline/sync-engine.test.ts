@@ -3,6 +3,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { createOfflineDb, type OfflineDb } from './db';
 import { FakeServer } from './fake-server';
 import { recordEvent, startResuscitation } from './record';
+import { runStoreRead, type StoreRead } from './store-reads';
 import { CLOCK_MAX_AGE_MS, SyncEngine } from './sync-engine';
 
 const siteId = '0b7e6a50-3b1e-4c55-9a51-6a0b7d2d1a01';
@@ -88,5 +89,30 @@ describe('the sync engine measures the clock once a minute, not on every drain',
     const now = await db.meta.get('context');
     expect(now?.value).toMatchObject({ serverTime: new Date(clock).toISOString() });
     expect(now && 'sites' in now.value ? now.value.sites : []).toHaveLength(2);
+  });
+});
+
+describe("the sync engine's reads", () => {
+  it('go through the read it is given (the app: the tap writer worker), and it sends what they name', async () => {
+    const asked: string[] = [];
+    const reading = new SyncEngine(db, server, {
+      isOnline: () => true,
+      hasSession: () => true,
+      now: () => clock,
+      read: <T>(r: StoreRead) => {
+        asked.push(r.read);
+        return runStoreRead(db, r) as Promise<T>;
+      },
+    });
+    const rec = await startResuscitation({ siteId }, db);
+    await tapNote(rec.id, 'a');
+    await tapNote(rec.id, 'b');
+    expect(await reading.syncNow()).toEqual({ sent: 2, refused: 0 });
+    expect(asked).toEqual(['waiting', 'unsent']);
+    expect(server.stored.events.size).toBe(2);
+    // Nothing waits: the count alone is read, nothing is sent.
+    expect(await reading.syncNow()).toEqual({ sent: 0, refused: 0 });
+    expect(asked).toEqual(['waiting', 'unsent', 'waiting']);
+    reading.stop();
   });
 });

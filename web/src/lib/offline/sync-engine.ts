@@ -3,7 +3,8 @@ import { authStore } from '../auth-store';
 import { backoffDelay, type BackoffOptions } from './backoff';
 import { measureClock } from './clock';
 import { type OfflineDb } from './db';
-import { countWaiting, drainOutbox, type DrainResult } from './outbox';
+import { drainOutbox, type DrainResult } from './outbox';
+import { runStoreRead, type StoreRead, type Unsent } from './store-reads';
 import { clockRefusal, ClockRefusedError } from './send-batch';
 import type { SyncTransport } from './transport';
 import { writeSignal } from './write-signal';
@@ -53,6 +54,12 @@ export interface EngineOptions {
   isOnline?: () => boolean;
   hasSession?: () => boolean;
   now?: () => number;
+  /**
+   * Runs the drain's reads (waiting count, unsent items); default: on this thread. The app
+   * passes the tap writer's worker, so a drain's read never holds a tap's write back while
+   * the screen draws (see `StoreRead`).
+   */
+  read?: <T>(r: StoreRead) => Promise<T>;
 }
 
 /**
@@ -85,6 +92,7 @@ export class SyncEngine {
       isOnline: () => typeof navigator === 'undefined' || navigator.onLine,
       hasSession: () => authStore.get() !== null,
       now: Date.now,
+      read: <T>(r: StoreRead) => runStoreRead(db, r) as Promise<T>,
       ...options,
     };
     const online = this.o.isOnline();
@@ -135,12 +143,13 @@ export class SyncEngine {
     try {
       const offsetMs = await this.clockOffset();
       checkClock(offsetMs);
-      const result = (await countWaiting(this.db))
+      const result = (await this.o.read<number>({ read: 'waiting' }))
         ? await drainOutbox(
             this.db,
             this.transport,
             offsetMs,
             this.state.failures >= BISECT_AFTER_FAILURES,
+            () => this.o.read<Unsent>({ read: 'unsent' }),
           )
         : { sent: 0, refused: 0 };
       this.nextAttemptAt = 0;

@@ -2,7 +2,7 @@ import Dexie from 'dexie';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { createOfflineDb, type LocalEvent, type OfflineDb } from './db';
 import { countRefused, countWaiting } from './outbox';
-import { TapWriter, type TapWrite, type TapWritten } from './tap-writer';
+import { TapWriter, type TapWritten, type WorkerRequest } from './tap-writer';
 
 let db: OfflineDb;
 beforeEach(() => {
@@ -23,19 +23,21 @@ const event = (n: number): LocalEvent => ({
 
 /** A stand-in for the worker: holds what it is sent; the test answers or fails it. */
 class HeldWorker {
-  sent: TapWrite[] = [];
+  sent: WorkerRequest[] = [];
   terminated = false;
   onmessage: ((m: MessageEvent<TapWritten>) => void) | null = null;
   onerror: ((e: Event) => void) | null = null;
-  postMessage(w: TapWrite) {
+  postMessage(w: WorkerRequest) {
     this.sent.push(w);
   }
   terminate() {
     this.terminated = true;
   }
-  answer(w: TapWrite) {
+  answer(w: WorkerRequest, value?: unknown) {
     const committedAt = performance.timeOrigin + performance.now();
-    this.onmessage?.({ data: { seq: w.seq, ok: true, committedAt } } as MessageEvent<TapWritten>);
+    this.onmessage?.({
+      data: { seq: w.seq, ok: true, committedAt, value },
+    } as MessageEvent<TapWritten>);
   }
 }
 
@@ -100,6 +102,51 @@ describe('tap writer', () => {
       data: { seq, ok: false, committedAt: 0, error: 'QuotaExceededError: full' },
     } as MessageEvent<TapWritten>);
     await expect(pending).rejects.toThrow('QuotaExceededError: full');
+  });
+});
+
+describe("the Live screen's reads", () => {
+  it('go to the worker and resolve with its answer; a failed worker has them redone here', async () => {
+    const worker = new HeldWorker();
+    const writer = new TapWriter(
+      () => db,
+      () => worker as unknown as Worker,
+    );
+    const [a, b] = [event(1), event(2)];
+    await db.events.bulkAdd([a, b]);
+    const rows = writer.read({ read: 'rows', table: 'events', resuscitationId: 'r1', since: null });
+    expect(worker.sent).toEqual([expect.objectContaining({ read: 'rows', since: null })]);
+    worker.answer(worker.sent[0], { count: 9, rows: [] }); // the worker's answer, whatever it is
+    await expect(rows).resolves.toEqual({ count: 9, rows: [] });
+
+    const waiting = writer.read<number>({ read: 'waiting' });
+    expect(worker.sent[1]).toMatchObject({ read: 'waiting' });
+    worker.onerror?.(new Event('error'));
+    await expect(waiting).resolves.toBe(2); // counted here: two events, no answer yet
+    const tail = await writer.read({
+      read: 'rows',
+      table: 'events',
+      resuscitationId: 'r1',
+      since: b.at,
+    });
+    expect(tail).toEqual({ count: 2, rows: [b] });
+    expect(worker.sent).toHaveLength(2);
+  });
+
+  it('name a failed read as a read, not as a tap that was not stored', async () => {
+    const worker = new HeldWorker();
+    const writer = new TapWriter(
+      () => db,
+      () => worker as unknown as Worker,
+    );
+    const pending = writer.read({ read: 'waiting' });
+    worker.onmessage?.({
+      data: { seq: worker.sent[0].seq, ok: false, committedAt: 0, error: 'UnknownError: gone' },
+    } as MessageEvent<TapWritten>);
+    await expect(pending).rejects.toMatchObject({
+      name: 'StoreReadError',
+      message: 'UnknownError: gone',
+    });
   });
 });
 

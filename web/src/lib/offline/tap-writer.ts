@@ -1,10 +1,14 @@
 import type { LocalEtco2, LocalEvent, OfflineDb } from './db';
+import { runStoreRead, type StoreRead } from './store-reads';
 
 /** One tap: an event or a typed EtCO2 value, with the table it goes to. */
 export type Tap = { table: 'events'; row: LocalEvent } | { table: 'etco2'; row: LocalEtco2 };
 
 /** A tap for the writer worker. */
 export type TapWrite = Tap & { seq: number };
+
+/** What the page asks of the worker: a tap to write, or a read (see `StoreRead`). */
+export type WorkerRequest = TapWrite | (StoreRead & { seq: number });
 
 /** Adds the tap's row to its table (either thread). */
 export function addRow(db: OfflineDb, tap: Tap): Promise<string> {
@@ -17,11 +21,13 @@ export interface TapWritten {
   ok: boolean;
   committedAt: number;
   error?: string;
+  /** A read's answer. */
+  value?: unknown;
 }
 
 interface Pending {
-  write: TapWrite;
-  resolve: (committedAt: number) => void;
+  request: WorkerRequest;
+  resolve: (answer: TapWritten) => void;
   reject: (error: Error) => void;
 }
 
@@ -44,9 +50,10 @@ export async function addTap(db: OfflineDb, tap: Tap): Promise<number> {
 
 /**
  * Writes taps (events and typed EtCO2 values) to IndexedDB through a dedicated worker, so a
- * commit never waits for the screen's thread to finish drawing. Where no worker can run
- * (tests, a worker that failed to load), it writes on this thread instead; writes the worker
- * had not confirmed are redone here, and a row already there counts as written.
+ * commit never waits for the screen's thread to finish drawing; the reads the Live screen
+ * repeats after each tap run there too (`read`). Where no worker can run (tests, a worker that
+ * failed to load), it works on this thread instead; what the worker had not answered is redone
+ * here, and a row already there counts as written.
  */
 export class TapWriter {
   /** undefined: not started yet; null: no worker, write on this thread. */
@@ -65,13 +72,22 @@ export class TapWriter {
   }
 
   /** Resolves once IndexedDB has committed the row, with the commit time on this page's clock. */
-  write(tap: Tap): Promise<number> {
+  async write(tap: Tap): Promise<number> {
+    const answer = await this.ask({ ...tap, seq: ++this.seq });
+    return answer.committedAt - performance.timeOrigin;
+  }
+
+  /** Runs a read in the worker (on this thread without one); resolves with its answer. */
+  async read<T>(r: StoreRead): Promise<T> {
+    return (await this.ask({ ...r, seq: ++this.seq })).value as T;
+  }
+
+  private ask(request: WorkerRequest): Promise<TapWritten> {
     const worker = this.ensureWorker();
-    if (!worker) return this.direct(tap);
-    const write: TapWrite = { ...tap, seq: ++this.seq };
+    if (!worker) return this.direct(request);
     return new Promise((resolve, reject) => {
-      this.pending.set(write.seq, { write, resolve, reject });
-      worker.postMessage(write);
+      this.pending.set(request.seq, { request, resolve, reject });
+      worker.postMessage(request);
     });
   }
 
@@ -89,12 +105,17 @@ export class TapWriter {
     return this.worker;
   }
 
-  private settle({ seq, ok, committedAt, error }: TapWritten) {
-    const p = this.pending.get(seq);
+  private settle(answer: TapWritten) {
+    const p = this.pending.get(answer.seq);
     if (!p) return;
-    this.pending.delete(seq);
-    if (ok) p.resolve(committedAt - performance.timeOrigin);
-    else p.reject(Object.assign(new Error(error ?? 'not stored'), { name: 'TapWriteError' }));
+    this.pending.delete(answer.seq);
+    if (answer.ok) p.resolve(answer);
+    else
+      p.reject(
+        Object.assign(new Error(answer.error ?? 'not stored'), {
+          name: 'read' in p.request ? 'StoreReadError' : 'TapWriteError',
+        }),
+      );
   }
 
   /** The worker failed: from now on write here, starting with what it had not confirmed. */
@@ -103,10 +124,14 @@ export class TapWriter {
     this.worker = null;
     const waiting = [...this.pending.values()];
     this.pending.clear();
-    for (const p of waiting) this.direct(p.write).then(p.resolve, p.reject);
+    for (const p of waiting) this.direct(p.request).then(p.resolve, p.reject);
   }
 
-  private direct(tap: Tap): Promise<number> {
-    return addTap(this.db(), tap);
+  private async direct(request: WorkerRequest): Promise<TapWritten> {
+    const { seq } = request;
+    if ('read' in request)
+      return { seq, ok: true, committedAt: 0, value: await runStoreRead(this.db(), request) };
+    const committedAt = await addTap(this.db(), request);
+    return { seq, ok: true, committedAt: committedAt + performance.timeOrigin };
   }
 }
