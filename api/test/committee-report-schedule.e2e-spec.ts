@@ -11,6 +11,7 @@ import { loadConfig } from '../src/config';
 import { CommitteeReportMailService } from '../src/modules/committee-report/committee-report-mail.service';
 import { COMMITTEE_REPORT_JOB } from '../src/modules/committee-report/committee-report.scheduler';
 import { startMailSink } from '../src/modules/mail/mail-sink';
+import { OutboxRepository } from '../src/modules/mail/outbox.repository';
 import { freePort } from './free-port';
 import { fixtureRows, insertFixture } from './quality-fixtures';
 import { demoSiteId, startTestApp, type TestApp } from './test-app';
@@ -129,6 +130,32 @@ describe('monthly committee report on schedule', () => {
     expect([...a, ...b].sort()).toEqual([demoSiteId, otherSite].sort());
     const january = (await received()).filter((m) => m.subject.endsWith('2026-01'));
     expect(january).toHaveLength(2);
+  });
+
+  it('a send that fails between the claim and the queued message leaves the month unclaimed, so the next run sends it', async () => {
+    const service = t.app.get(CommitteeReportMailService);
+    const outbox = t.app.get(OutboxRepository);
+    const now = new Date('2026-01-01T06:00:00Z');
+    // The first site's message cannot be queued (as if the process died there).
+    const insert = jest.spyOn(outbox, 'insert').mockRejectedValueOnce(new Error('connection lost'));
+    try {
+      const first = await service.sendMonth('2025-12', now);
+      expect(first).toHaveLength(1);
+      const claimed = await t
+        .db('committeeReportSends')
+        .where({ month: '2025-12' })
+        .select<{ siteId: string }[]>('siteId');
+      expect(claimed.map((c) => c.siteId)).toEqual(first);
+      const second = await service.sendMonth('2025-12', now);
+      expect([...first, ...second].sort()).toEqual([demoSiteId, otherSite].sort());
+    } finally {
+      insert.mockRestore();
+    }
+    const december = (await received()).filter((m) => m.subject.endsWith('2025-12'));
+    expect(december.map((m) => m.to[0]).sort()).toEqual([
+      otherQuality.email,
+      'quality@kestrel.test',
+    ]);
   });
 
   it('is on by default at 06:00 UTC on the 1st and off with COMMITTEE_REPORT_SCHEDULE=off', () => {

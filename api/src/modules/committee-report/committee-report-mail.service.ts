@@ -57,16 +57,22 @@ export class CommitteeReportMailService {
     const committee = committeeOf(siteId);
     const data = await this.reports.gather(committee, { month, siteId });
     const pdf = await this.reports.render(data, now);
-    // Rendered first, claimed second: only the instance whose claim goes in sends.
-    if (!(await this.repo.claim(siteId, month))) return false;
-    const status = await this.mail.send({
+    const message = {
       to: to.map((u) => u.email),
       subject: `Monthly committee report — ${data.scope}, ${month}`,
       text: bodyOf(month, data.scope),
       attachments: [
         { filename: reportFileName(month), content: pdf, contentType: 'application/pdf' },
       ],
-    });
+    };
+    // Rendered first, claimed second: only the instance whose claim goes in sends. The claim
+    // and the queued message commit together; the message is then tried at once (a failed try
+    // stays queued for the retry worker).
+    const id = await this.repo.claimAndQueue(siteId, month, (trx) =>
+      this.mail.enqueue(message, trx),
+    );
+    if (id === null) return false;
+    const status = await this.mail.attempt(id, message);
     await this.audit.insert({
       userId: null,
       action: 'email',

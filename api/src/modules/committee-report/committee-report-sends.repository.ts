@@ -24,15 +24,20 @@ export class CommitteeReportSendsRepository {
   }
 
   /**
-   * Claims the month's send for a site: true for the one caller whose row went in, false
-   * for every other, in this process or another (the primary key decides).
+   * Claims the month's send for a site and, in the same transaction, runs `queue` (which
+   * queues the message): the claim and the queued message commit together, so a process that
+   * dies after the claim cannot leave a month claimed but never sent. Returns `queue`'s result
+   * for the one caller whose claim went in, null for every other, in this process or another
+   * (the primary key decides).
    */
-  async claim(siteId: string, month: string): Promise<boolean> {
-    const rows = await this.db('committeeReportSends')
-      .insert({ siteId, month })
-      .onConflict(['siteId', 'month'])
-      .ignore()
-      .returning('month');
-    return rows.length === 1;
+  claimAndQueue<T>(siteId: string, month: string, queue: (trx: Db) => Promise<T>) {
+    return this.db.transaction(async (trx): Promise<T | null> => {
+      const rows = await trx('committeeReportSends')
+        .insert({ siteId, month })
+        .onConflict(['siteId', 'month'])
+        .ignore()
+        .returning('month');
+      return rows.length === 1 ? queue(trx) : null;
+    });
   }
 }

@@ -45,9 +45,18 @@ export class MailService implements OnModuleDestroy {
    * else. Without one, a failed attempt stays queued for retry and the call resolves 'queued'.
    */
   async send(message: MailMessage, trx?: Db): Promise<'sent' | 'queued'> {
+    const id = await this.enqueue(message, trx);
+    return this.attempt(id, message, trx);
+  }
+
+  /**
+   * Queues a message without trying it: in the caller's transaction, the row commits with the
+   * caller's other writes or not at all. `attempt` tries it; else the retry worker sends it.
+   */
+  enqueue(message: MailMessage, trx?: Db): Promise<string> {
     const to = Array.isArray(message.to) ? message.to : [message.to];
     const attachment = message.attachments?.[0];
-    const id = await this.outbox.insert(
+    return this.outbox.insert(
       {
         to,
         subject: message.subject,
@@ -61,6 +70,11 @@ export class MailService implements OnModuleDestroy {
       },
       trx,
     );
+  }
+
+  /** Tries a queued message now (see `send` for what a failure does). */
+  async attempt(id: string, message: MailMessage, trx?: Db): Promise<'sent' | 'queued'> {
+    const to = Array.isArray(message.to) ? message.to : [message.to];
     try {
       const { resuscitationId: _r, createdBy: _c, ...mail } = message;
       await this.transport.sendMail({ from: this.config.smtp.from, ...mail, to });
