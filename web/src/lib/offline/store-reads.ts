@@ -54,14 +54,16 @@ export function readRows<T extends RecordRow>(
   });
 }
 
+/** The stores `countWaiting` reads: a commit to one of them changes the count. */
+export const WAITING_STORES = ['outbox', 'events', 'etco2', 'waveformChunks', 'acks'];
+
 /**
  * How many writes wait for the server (records, events, values, chunks): items are never
  * deleted and each has at most one answer, so what waits is the items less the answers.
  */
 export function countWaiting(db: OfflineDb): Promise<number> {
   // One read transaction for the five counts: fewer transactions for a tap's write to queue behind.
-  const tables = [db.outbox, db.events, db.etco2, db.waveformChunks, db.acks];
-  return db.transaction('r', tables, async () => {
+  return db.transaction('r', WAITING_STORES, async () => {
     const [ops, events, etco2, chunks, answered] = await Promise.all([
       db.outbox.filter((o) => !o.failed).count(),
       db.events.count(),
@@ -98,13 +100,6 @@ export function unsentItems(db: OfflineDb): Promise<Unsent> {
     ]);
     return { events, etco2, waveform };
   });
-}
-
-/** The stores a read looks at (a commit to one of them makes the read's answer stale). */
-export function storesOf(r: StoreRead): string[] {
-  if (r.read === 'rows') return [r.table];
-  if (r.read === 'unsent') return ['acks', 'events', 'etco2', 'waveformChunks'];
-  return ['outbox', 'events', 'etco2', 'waveformChunks', 'acks'];
 }
 
 /** Runs a read on a database (the worker's or this thread's). */

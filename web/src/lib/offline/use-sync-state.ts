@@ -4,14 +4,12 @@ import { offlineDb } from './db';
 import { countRefused } from './outbox';
 import { syncEngine } from './engine-instance';
 import { tapWriter } from './record';
-import { storesOf } from './store-reads';
+import { WAITING_STORES } from './store-reads';
 import { useStoreQuery } from './use-store-query';
 
 // Counted in the tap writer's worker: this count is read again after every tap, and a read on
 // this thread would hold the next tap's write back while the screen draws.
-const waitingRead = { read: 'waiting' } as const;
-const readWaiting = () => tapWriter.read<number>(waitingRead);
-const waitingStores = storesOf(waitingRead);
+const readWaiting = () => tapWriter.read<number>({ read: 'waiting' });
 
 export interface SyncState {
   status: 'saved' | 'waiting' | 'offline';
@@ -28,7 +26,7 @@ export interface SyncState {
 /** "All saved", "N waiting" or "Offline", live from IndexedDB and the sync engine. */
 export function useSyncState(): SyncState {
   const engine = useSyncExternalStore(syncEngine.subscribe, syncEngine.getState);
-  const waiting = useStoreQuery(readWaiting, offlineDb.name, waitingStores, 0);
+  const waiting = useStoreQuery(readWaiting, offlineDb.name, WAITING_STORES, 0);
   const refused = useLiveQuery(() => countRefused(offlineDb), [], 0);
   const status = !engine.online ? 'offline' : waiting > 0 ? 'waiting' : 'saved';
   return {
