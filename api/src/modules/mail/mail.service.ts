@@ -28,6 +28,9 @@ const unreachable = () =>
  * Every message is first written to `mail_outbox` (the queue the admin mail viewer shows),
  * then sent at once.
  */
+const recipients = (message: MailMessage): string[] =>
+  Array.isArray(message.to) ? message.to : [message.to];
+
 @Injectable()
 export class MailService implements OnModuleDestroy {
   private readonly transport: Transporter;
@@ -54,11 +57,10 @@ export class MailService implements OnModuleDestroy {
    * caller's other writes or not at all. `attempt` tries it; else the retry worker sends it.
    */
   enqueue(message: MailMessage, trx?: Db): Promise<string> {
-    const to = Array.isArray(message.to) ? message.to : [message.to];
     const attachment = message.attachments?.[0];
     return this.outbox.insert(
       {
-        to,
+        to: recipients(message),
         subject: message.subject,
         body: message.text,
         attachmentName: attachment?.filename ?? null,
@@ -74,10 +76,13 @@ export class MailService implements OnModuleDestroy {
 
   /** Tries a queued message now (see `send` for what a failure does). */
   async attempt(id: string, message: MailMessage, trx?: Db): Promise<'sent' | 'queued'> {
-    const to = Array.isArray(message.to) ? message.to : [message.to];
     try {
       const { resuscitationId: _r, createdBy: _c, ...mail } = message;
-      await this.transport.sendMail({ from: this.config.smtp.from, ...mail, to });
+      await this.transport.sendMail({
+        from: this.config.smtp.from,
+        ...mail,
+        to: recipients(message),
+      });
     } catch (error) {
       if (trx) throw unreachable();
       await this.outbox.markFailed(id, String(error), new Date(Date.now() + 60_000));
